@@ -1,0 +1,36 @@
+import { resolve } from 'node:path';
+
+// One place that reads the environment. Plain process.env (not $env) so the same modules run
+// under the app, under vitest and under the command-line scripts in scripts/.
+function read(name: string, fallback: string): string {
+	const value = process.env[name];
+	return value === undefined || value === '' ? fallback : value;
+}
+
+export const config = {
+	get databaseFile() {
+		return resolve(read('DATABASE_FILE', './data/beadline.sqlite'));
+	},
+	get dataDir() {
+		return resolve(read('DATA_DIR', './data'));
+	},
+	get uploadsDir() {
+		return resolve(read('UPLOADS_DIR', './data/uploads'));
+	},
+	get smtpUrl() {
+		return read('SMTP_URL', 'smtp://127.0.0.1:2525');
+	},
+	get mailFrom() {
+		return read('MAIL_FROM', 'Beadline <no-reply@beadline.invalid>');
+	},
+	/** Where the local mail catcher keeps what it caught; empty when no catcher runs. */
+	get mailCatcherDir() {
+		return process.env.MAIL_CATCHER_DIR ? resolve(process.env.MAIL_CATCHER_DIR) : '';
+	},
+	get origin() {
+		return read('ORIGIN', 'http://localhost:5173');
+	},
+	get isDemo() {
+		return process.env.BEADLINE_DEMO === '1';
+	}
+};

@@ -1,0 +1,3 @@
+export { sequelize } from './sequelize';
+export { write } from './write-queue';
+export { migrate } from './migrate';

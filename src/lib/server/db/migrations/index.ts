@@ -1,0 +1,12 @@
+import type { QueryInterface } from 'sequelize';
+import * as foundation from './0001-foundation';
+
+export interface Migration {
+	name: string;
+	up(params: { context: QueryInterface }): Promise<void>;
+	down(params: { context: QueryInterface }): Promise<void>;
+}
+
+// Listed by hand (not globbed) so the same list runs under Vite, vitest and plain tsx scripts.
+// Append new migrations at the end; never edit one that has shipped.
+export const migrations: Migration[] = [{ name: '0001-foundation', ...foundation }];

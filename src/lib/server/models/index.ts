@@ -1,0 +1,12 @@
+import { AuditEvent } from './audit-event';
+import { Account, Session, VerificationToken } from './auth-tables';
+import { Invite } from './invite';
+import { Shop } from './shop';
+import { User } from './user';
+
+Shop.hasMany(User, { foreignKey: 'shopId' });
+User.belongsTo(Shop, { foreignKey: 'shopId' });
+Shop.hasMany(Invite, { foreignKey: 'shopId' });
+Invite.belongsTo(Shop, { foreignKey: 'shopId' });
+
+export { Account, AuditEvent, Invite, Session, Shop, User, VerificationToken };

@@ -1,0 +1,29 @@
+import {
+	DataTypes,
+	Model,
+	type CreationOptional,
+	type InferAttributes,
+	type InferCreationAttributes
+} from 'sequelize';
+import { sequelize } from '../db/sequelize';
+
+export type UnitSystem = 'imperial' | 'metric';
+
+export class Shop extends Model<InferAttributes<Shop>, InferCreationAttributes<Shop>> {
+	declare id: CreationOptional<number>;
+	declare name: string;
+	declare unitSystem: CreationOptional<UnitSystem>;
+	declare createdAt: CreationOptional<Date>;
+	declare updatedAt: CreationOptional<Date>;
+}
+
+Shop.init(
+	{
+		id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
+		name: { type: DataTypes.STRING(120), allowNull: false },
+		unitSystem: { type: DataTypes.STRING(10), allowNull: false, defaultValue: 'imperial' },
+		createdAt: DataTypes.DATE,
+		updatedAt: DataTypes.DATE
+	},
+	{ sequelize, tableName: 'shops' }
+);

@@ -1,0 +1,14 @@
+import { sveltekit } from '@sveltejs/kit/vite';
+import tailwindcss from '@tailwindcss/vite';
+import { defineConfig } from 'vitest/config';
+
+export default defineConfig({
+	plugins: [tailwindcss(), sveltekit()],
+	test: {
+		include: ['src/**/*.test.ts', 'scripts/**/*.test.ts'],
+		environment: 'node',
+		// SQLite files per test file; keep workers few so native builds stay light on 2 cores.
+		maxWorkers: 2,
+		testTimeout: 20_000
+	}
+});
