@@ -1,0 +1,69 @@
+import { mkdtempSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { beforeAll, describe, expect, it } from 'vitest';
+
+// A throw-away database for this file, set before the data layer is first imported.
+process.env.DATABASE_FILE = join(mkdtempSync(join(tmpdir(), 'beadline-profile-')), 'test.sqlite');
+
+const { User } = await import('../models');
+const { verifyPassword } = await import('../auth/password');
+const { RefusedError } = await import('./errors');
+const { changePassword, getProfile, signOutMyDevices, updateProfile } = await import('./profile');
+const { getShopSettings, updateShopSettings } = await import('./shop-settings');
+const { addMember, newShop } = await import('./test-support');
+
+type ShopFixture = Awaited<ReturnType<typeof newShop>>;
+let a: ShopFixture;
+
+beforeAll(async () => {
+	a = await newShop('Profile A');
+});
+
+describe('profile', () => {
+	it('stores "shop" as no preference of one\u2019s own', async () => {
+		const me = await addMember(a.shopId, 'welder');
+		await updateProfile(me, { name: 'Tomas Whitlow', unitSystem: 'metric' });
+		expect(await getProfile(me)).toMatchObject({ name: 'Tomas Whitlow', unitSystem: 'metric' });
+		await updateProfile(me, { name: 'Tomas Whitlow', unitSystem: 'shop' });
+		expect((await User.findByPk(me.id))?.unitSystem).toBeNull();
+		expect((await getProfile(me)).unitSystem).toBe('shop');
+	});
+
+	it('changes the password only with the current one, and ends every session', async () => {
+		const me = a.admin;
+		const err = await changePassword(me, {
+			current: 'wrong password',
+			password: 'brand new password'
+		}).catch((e: unknown) => e);
+		expect(err).toBeInstanceOf(RefusedError);
+		expect((err as InstanceType<typeof RefusedError>).field).toBe('current');
+		const before = (await User.findByPk(me.id, { rejectOnEmpty: true })).sessionVersion;
+		await changePassword(me, { current: 'correct horse battery', password: 'brand new password' });
+		const after = await User.findByPk(me.id, { rejectOnEmpty: true });
+		expect(await verifyPassword('brand new password', after.passwordHash)).toBe(true);
+		expect(after.sessionVersion).toBe(before + 1);
+	});
+
+	it('signs one\u2019s own sessions out everywhere', async () => {
+		const me = await addMember(a.shopId, 'inspector');
+		await signOutMyDevices(me);
+		expect((await User.findByPk(me.id))?.sessionVersion).toBe(2);
+	});
+});
+
+describe('shop settings', () => {
+	it('updates name and unit system for the admin\u2019s own shop only', async () => {
+		const b = await newShop('Profile B');
+		await updateShopSettings(a.admin, { name: 'Profile A renamed', unitSystem: 'metric' });
+		expect(await getShopSettings(a.admin)).toEqual({
+			name: 'Profile A renamed',
+			unitSystem: 'metric'
+		});
+		expect(await getShopSettings(b.admin)).toEqual({ name: 'Profile B', unitSystem: 'imperial' });
+		const welder = await addMember(a.shopId, 'welder');
+		await expect(
+			updateShopSettings(welder, { name: 'Hijack', unitSystem: 'imperial' })
+		).rejects.toThrow(/admin/);
+	});
+});
