@@ -1,3 +1,4 @@
+import { ApiToken } from './api-token';
 import { AuditEvent } from './audit-event';
 import { Account, Session, VerificationToken } from './auth-tables';
 import { Invite } from './invite';
@@ -9,4 +10,8 @@ User.belongsTo(Shop, { foreignKey: 'shopId' });
 Shop.hasMany(Invite, { foreignKey: 'shopId' });
 Invite.belongsTo(Shop, { foreignKey: 'shopId' });
 
-export { Account, AuditEvent, Invite, Session, Shop, User, VerificationToken };
+Shop.hasMany(ApiToken, { foreignKey: 'shopId' });
+ApiToken.belongsTo(Shop, { foreignKey: 'shopId' });
+ApiToken.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
+
+export { Account, ApiToken, AuditEvent, Invite, Session, Shop, User, VerificationToken };

@@ -1,5 +1,6 @@
 import type { QueryInterface } from 'sequelize';
 import * as foundation from './0001-foundation';
+import * as apiTokens from './0002-api-tokens';
 
 export interface Migration {
 	name: string;
@@ -9,4 +10,7 @@ export interface Migration {
 
 // Listed by hand (not globbed) so the same list runs under Vite, vitest and plain tsx scripts.
 // Append new migrations at the end; never edit one that has shipped.
-export const migrations: Migration[] = [{ name: '0001-foundation', ...foundation }];
+export const migrations: Migration[] = [
+	{ name: '0001-foundation', ...foundation },
+	{ name: '0002-api-tokens', ...apiTokens }
+];
