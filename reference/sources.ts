@@ -1,0 +1,241 @@
+import type { Source } from './types';
+
+// One entry per document the tables lean on. Rows point at these objects so that edition and
+// kind travel with every number. README.md lists the same set for people.
+
+export const OSHA_1910_133: Source = {
+	label: 'OSHA 29 CFR 1910.133(a)(5)',
+	edition: '29 CFR 1910.133 as amended 2016 (table read from public copies of the CFR text)',
+	kind: 'published'
+};
+
+export const ANSI_Z49_1_SHADE: Source = {
+	label: 'ANSI Z49.1 / AWS F2.2 lens shade guide (suggested comfort shade)',
+	edition: 'ANSI Z49.1:2012 and AWS F2.2:2001 (R2010), as reprinted in equipment manuals',
+	kind: 'published'
+};
+
+export const ASME_IX_QW_409_1: Source = {
+	label: 'ASME BPVC Section IX QW-409.1(a)',
+	edition: 'BPVC IX 2019 and later',
+	kind: 'published',
+	note: 'Heat input = V x A x 60 / travel speed; no efficiency factor.'
+};
+
+export const ISO_TR_17671_1: Source = {
+	label: 'ISO/TR 17671-1 (EN 1011-1) thermal efficiency factor k',
+	edition: 'ISO/TR 17671-1:2002; EN 1011-1:2009 Table 1',
+	kind: 'published'
+};
+
+export const ASME_IX_QW_451_1: Source = {
+	label: 'ASME BPVC Section IX QW-451.1',
+	edition: 'BPVC IX 2010 through 2021 (rows unchanged as far as known)',
+	kind: 'published',
+	note: 'Groove-weld tension and transverse-bend tests; table notes beyond the t >= 3/4 in rule are not modelled.'
+};
+
+export const ASME_IX_QW_461_9: Source = {
+	label: 'ASME BPVC Section IX QW-461.9',
+	edition: 'BPVC IX 2010 through 2021 (rows unchanged as far as known)',
+	kind: 'published'
+};
+
+export const ASME_IX_QW_452_1B: Source = {
+	label: 'ASME BPVC Section IX QW-452.1(b)',
+	edition: 'BPVC IX 2010 with 2011a addenda (read from a public copy)',
+	kind: 'published'
+};
+
+export const ASME_IX_QW_452_3: Source = {
+	label: 'ASME BPVC Section IX QW-452.3',
+	edition: 'BPVC IX 2010s editions, as quoted in public training notes',
+	kind: 'published',
+	note: '2-7/8 in (73 mm) OD is the equivalent of NPS 2-1/2 (DN 65).'
+};
+
+export const ASME_IX_QW_403_10: Source = {
+	label: 'ASME BPVC Section IX QW-403.10 (GMAW short-circuit)',
+	edition: 'BPVC IX, recalled',
+	kind: 'from memory',
+	note: 'Coupon under 1/2 in welded short-circuit: maximum qualified 1.1T. Verify in the code.'
+};
+
+export const ASME_IX_QW_422: Source = {
+	label: 'ASME BPVC Section IX QW/QB-422 (P-Numbers)',
+	edition: 'BPVC IX 2017 (read from a public copy of the table)',
+	kind: 'published'
+};
+
+export const ASME_IX_QW_422_MEMORY: Source = {
+	label: 'ASME BPVC Section IX QW/QB-422 (P-Numbers)',
+	edition: 'recalled, no copy at hand',
+	kind: 'from memory'
+};
+
+export const ASME_IX_QW_432: Source = {
+	label: 'ASME BPVC Section IX QW-432 (F-Numbers)',
+	edition: 'BPVC IX 2010s editions (specification-to-F-Number grouping read from a public chart)',
+	kind: 'published'
+};
+
+export const ASME_IX_QW_432_MEMORY: Source = {
+	label: 'ASME BPVC Section IX QW-432 (F-Numbers)',
+	edition: 'recalled, no copy at hand',
+	kind: 'from memory'
+};
+
+export const ASME_IX_QW_442: Source = {
+	label: 'ASME BPVC Section IX QW-442 (A-Numbers)',
+	edition: 'BPVC IX; A-1 for A5.18 carbon steel wire as given in the project brief',
+	kind: 'published'
+};
+
+export const ASME_IX_QW_442_MEMORY: Source = {
+	label: 'ASME BPVC Section IX QW-442 (A-Numbers)',
+	edition: 'recalled, no copy at hand; the A-Number really follows the deposit analysis',
+	kind: 'from memory'
+};
+
+export const AWS_A5_CLASSIFICATION: Source = {
+	label: 'AWS A5 filler metal classification system (A5.1, A5.9, A5.10, A5.18, A5.20, A5.28)',
+	edition: 'A5.18/A5.18M:2005 and the other A5 specifications of that period',
+	kind: 'published'
+};
+
+export const AWS_A5_12: Source = {
+	label: 'AWS A5.12/A5.12M tungsten electrode classifications',
+	edition: 'A5.12/A5.12M:2009 (names and oxide contents)',
+	kind: 'published'
+};
+
+export const TUNGSTEN_CHART_A: Source = {
+	label: 'Equipment maker chart A: tungsten current ranges (composite of AWS and electrode makers)',
+	edition: 'operating manual table dated 1988',
+	kind: 'common practice',
+	note: 'Same numbers as the project brief for 2 % Th / Ce / La.'
+};
+
+export const TUNGSTEN_CHART_B: Source = {
+	label: 'Equipment maker chart B: tungsten current ranges',
+	edition: 'inverter TIG operating manual, 2010s',
+	kind: 'common practice'
+};
+
+export const WIRE_CHART_BRIEF: Source = {
+	label: 'Solid wire amperage by diameter and transfer (equipment data)',
+	edition: 'values as collected in the project brief',
+	kind: 'common practice'
+};
+
+export const WFS_PER_AMP: Source = {
+	label: 'Wire feed speed per amp (small GMAW machine manuals)',
+	edition: 'operating manuals 2010s; 0.045 in value from the project brief',
+	kind: 'common practice'
+};
+
+export const GTAW_ROD_CHART: Source = {
+	label: 'GTAW filler rod diameter by amperage (shop chart)',
+	edition: 'values as collected in the project brief',
+	kind: 'common practice'
+};
+
+export const SMAW_ELECTRODE_CHART: Source = {
+	label: 'SMAW electrode amperage by diameter (typical maker ranges)',
+	edition: 'recalled',
+	kind: 'from memory'
+};
+
+export const THICKNESS_RULE: Source = {
+	label: 'Rule of thumb: about 1 A per 0.001 in of thickness (GTAW, carbon steel)',
+	edition: 'shop practice; also printed in small machine manuals',
+	kind: 'common practice',
+	note: 'Stainless about 10 % lower, aluminium on AC about 20-30 % higher.'
+};
+
+export const GMAW_THICKNESS_BANDS: Source = {
+	label: 'GMAW amperage by thickness band (compiled for Beadline from typical shop charts)',
+	edition: 'Beadline 2025',
+	kind: 'common practice'
+};
+
+export const GAS_FLOW_PRACTICE: Source = {
+	label: 'Shielding gas flow ranges (shop practice and a welding textbook table)',
+	edition: 'values as collected in the project brief',
+	kind: 'common practice'
+};
+
+export const GAS_FLOW_MEMORY: Source = {
+	label: 'Shielding gas flow for helium-rich mixes and gas-shielded FCAW',
+	edition: 'recalled',
+	kind: 'from memory'
+};
+
+export const GAS_MIX_PRACTICE: Source = {
+	label: 'Common shielding gas mixes and what they suit',
+	edition: 'shop practice',
+	kind: 'common practice'
+};
+
+export const IIW_CE: Source = {
+	label: 'IIW carbon equivalent CE(IIW)',
+	edition: 'IIW formula as used in EN 1011-2 and AWS D1.1 Annex H',
+	kind: 'published'
+};
+
+export const CE_GUIDANCE: Source = {
+	label: 'Carbon equivalent preheat guidance (CE up to 0.40 usually none)',
+	edition: 'shop practice',
+	kind: 'common practice'
+};
+
+export const AWS_D1_1_TABLE_3_3: Source = {
+	label: 'AWS D1.1/D1.1M:2015 Table 3.3, Category B',
+	edition: 'D1.1/D1.1M:2015 (Table 5.8 in the 2020 edition)',
+	kind: 'published',
+	note: 'SMAW with low-hydrogen electrodes, SAW, GMAW, FCAW.'
+};
+
+export const AWS_D1_1_TABLE_4_5: Source = {
+	label: 'AWS D1.1/D1.1M:2015 Table 4.5 (PQR changes requiring requalification)',
+	edition: 'D1.1/D1.1M:2015 (table numbers change between editions)',
+	kind: 'published'
+};
+
+export const CONTINUITY_SOURCES: Source = {
+	label: 'ASME BPVC IX QW-322.1(a); AWS D1.1 welder period of effectiveness; ISO 9606-1 9.2',
+	edition: 'BPVC IX 2019+; D1.1/D1.1M:2015 4.2.3.1; ISO 9606-1:2012',
+	kind: 'published',
+	note: 'Six months without using the process; ISO asks for a confirmation every six months.'
+};
+
+export const INCH_EXACT: Source = {
+	label: '1 in = 25.4 mm exactly (NIST Handbook 44 Appendix C; 16 CFR 500.19)',
+	edition: 'NIST HB 44 (current); 16 CFR 500.19',
+	kind: 'published'
+};
+
+export const MSG_SHEET_STEEL: Source = {
+	label: "Manufacturers' Standard Gauge for uncoated sheet steel",
+	edition: 'weights of the 1893 U.S. Standard Gauge (15 U.S.C. 206) at 41.82 lb/ft2 per inch',
+	kind: 'published',
+	note: 'Values checked against published charts for 10, 14, 16, 18, 20, 21, 24 and 28 ga.'
+};
+
+export const AWG_ALUMINIUM: Source = {
+	label: 'Brown & Sharpe / AWG gauge (aluminium and other non-ferrous sheet)',
+	edition: 'ASTM B258 definition: d = 0.005 x 92^((36 - n) / 39) in',
+	kind: 'published'
+};
+
+export const BWG_TUBE: Source = {
+	label: 'Birmingham Wire Gauge (BWG) for tube wall',
+	edition: 'recalled tube-wall values',
+	kind: 'from memory'
+};
+
+export const POLARITY_PRACTICE: Source = {
+	label: 'Current type and polarity by process and base metal',
+	edition: 'shop practice',
+	kind: 'common practice'
+};
