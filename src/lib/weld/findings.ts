@@ -1,0 +1,79 @@
+// The shape every check answers with, and the small helpers the checks share.
+import type { Band, Source, SourceKind } from '$reference/types';
+import type { CheckId } from './check-catalogue';
+
+export type FindingStatus = 'ok' | 'caution' | 'outside';
+
+export interface FindingSource {
+	label: string;
+	kind: SourceKind;
+}
+
+export interface Expected {
+	min?: number;
+	max?: number;
+	unit: string;
+}
+
+export interface Finding {
+	check: CheckId;
+	status: FindingStatus;
+	message: string;
+	/** The value checked, in `expected.unit` (a classification string for text checks). */
+	value: number | string | null;
+	expected: Expected;
+	source: FindingSource;
+	/** The input the finding concerns, as a path into the settings body: "amps", "filler.diameter". */
+	field?: string;
+}
+
+/** Shown once in the UI beside the findings, not repeated in each message. */
+export const ADVISORY_NOTE =
+	'Beadline advises and records; the governing code, the engineer of record, the inspector and certified welders decide.';
+
+export const sourceOf = (s: Source): FindingSource => ({ label: s.label, kind: s.kind });
+
+export const isNum = (n: unknown): n is number => typeof n === 'number' && Number.isFinite(n);
+
+/**
+ * Status of a value against a band. Rule-of-thumb bands are soft: up to `margin` (10 %) past an
+ * edge is a caution, further is outside. Published limits pass margin 0.
+ */
+export function bandStatus(value: number, band: Partial<Band>, margin = 0.1): FindingStatus {
+	const { min, max } = band;
+	if (isNum(min) && value < min)
+		return value >= min * (1 - margin) && margin > 0 ? 'caution' : 'outside';
+	if (isNum(max) && value > max)
+		return value <= max * (1 + margin) && margin > 0 ? 'caution' : 'outside';
+	return 'ok';
+}
+
+/** "94–156 A", "at least 50 °F", "at most 35 CFH"; a shared unit is printed once. */
+export function rangeText(min: string | null, max: string | null): string {
+	if (min !== null && max !== null) {
+		const a = min.lastIndexOf(' ');
+		const unit = a > 0 ? min.slice(a) : '';
+		if (unit !== '' && max.endsWith(unit) && max.length > unit.length)
+			return `${min.slice(0, a)}–${max}`;
+		return `${min}–${max}`;
+	}
+	if (min !== null) return `at least ${min}`;
+	if (max !== null) return `at most ${max}`;
+	return 'any value';
+}
+
+const round = (n: number, places: number): number => {
+	const f = 10 ** places;
+	return Math.round(n * f) / f;
+};
+
+/** Expected block with values rounded for display (amps whole, others to `places`). */
+export function expected(band: Partial<Band>, unit: string, places = 0): Expected {
+	return {
+		...(isNum(band.min) ? { min: round(band.min, places) } : {}),
+		...(isNum(band.max) ? { max: round(band.max, places) } : {}),
+		unit
+	};
+}
+
+export { round };

@@ -1,0 +1,66 @@
+// Lens shade: OSHA 1910.133(a)(5) minimum and ANSI Z49.1 / AWS F2.2 suggested shade.
+import { SHADE_ADVICE, SHADE_TABLE, type ShadeProcess, type ShadeRow } from '$reference/shade';
+import { OSHA_1910_133 } from '$reference/sources';
+import type { Process } from '$reference/types';
+import type { CheckContext } from './context';
+import { isNum, sourceOf, type Finding } from './findings';
+
+export { SHADE_ADVICE };
+
+export interface Shade {
+	minimum: number;
+	/** Null where the guide gives no suggestion (the lowest SMAW and GMAW bands). */
+	suggested: number | null;
+	row: ShadeRow;
+	/** True when the current is past the last band of the table; the last row is used. */
+	aboveTable: boolean;
+}
+
+const TABLE_PROCESS: Record<Process, ShadeProcess> = {
+	SMAW: 'SMAW',
+	GMAW: 'GMAW-FCAW',
+	FCAW: 'GMAW-FCAW',
+	GTAW: 'GTAW'
+};
+
+/** Shade for a process at an amperage; a current on a shared band edge takes the darker row. */
+export function lensShade(process: Process, amps: number): Shade | null {
+	const p = TABLE_PROCESS[process];
+	if (!p || !isNum(amps) || amps < 0) return null;
+	const rows = SHADE_TABLE.filter((r) => r.process === p);
+	const hit = rows.find((r) => amps >= r.minAmps && amps < r.maxAmps);
+	const last = rows[rows.length - 1];
+	const row = hit ?? (last && amps >= last.maxAmps ? last : undefined);
+	if (!row) return null;
+	return { minimum: row.minimum, suggested: row.suggested, row, aboveTable: !hit };
+}
+
+export function checkLensShade(ctx: CheckContext): Finding | null {
+	const { process, amps, lensShade: used } = ctx.s;
+	if (!isNum(amps) || !isNum(used)) return null;
+	const shade = lensShade(process, amps);
+	if (!shade) return null;
+	const { minimum, suggested, row } = shade;
+	const band = `${row.minAmps === 0 ? `under ${row.maxAmps}` : `${row.minAmps}–${row.maxAmps}`} A`;
+	const suggestion = suggested === null ? '' : ` ANSI Z49.1 suggests ${suggested} for comfort.`;
+	const beyond = shade.aboveTable ? ` ${amps} A is past the end of the OSHA table; go darker.` : '';
+	if (used < minimum)
+		return {
+			check: 'lens-shade',
+			status: 'outside',
+			message: `Shade ${used} is below the OSHA minimum of ${minimum} for ${process} at ${band}.${suggestion}${beyond}`,
+			value: used,
+			expected: { min: minimum, unit: 'shade' },
+			source: sourceOf(OSHA_1910_133),
+			field: 'lensShade'
+		};
+	return {
+		check: 'lens-shade',
+		status: shade.aboveTable ? 'caution' : 'ok',
+		message: `Shade ${used} meets the OSHA minimum of ${minimum} for ${process} at ${band}.${suggestion}${beyond} ${SHADE_ADVICE}`,
+		value: used,
+		expected: { min: minimum, unit: 'shade' },
+		source: sourceOf(OSHA_1910_133),
+		field: 'lensShade'
+	};
+}
