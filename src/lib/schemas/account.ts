@@ -92,3 +92,20 @@ export const changePasswordSchema = z
 		path: ['confirm'],
 		message: 'The two passwords differ.'
 	});
+
+export const revokeInviteSchema = z.object({
+	inviteId: z.coerce.number('Unknown invite.').int('Unknown invite.').positive('Unknown invite.')
+});
+
+export const apiTokenSchema = z.object({
+	name: z
+		.string()
+		.trim()
+		.min(2, 'Name the token after where it is used.')
+		.max(80, 'Keep it under 80 characters.'),
+	role: z.enum(['engineer', 'inspector', 'welder'], 'Pick the rights the token acts with.')
+});
+
+export const tokenIdSchema = z.object({
+	tokenId: z.coerce.number().int().positive('Unknown token.')
+});
