@@ -18,6 +18,7 @@ const baseURL = `http://localhost:${process.env.E2E_PORT}`;
 
 export default defineConfig({
 	testDir: 'tests',
+	outputDir: process.env.PW_OUTPUT_DIR ?? 'test-results',
 	fullyParallel: false,
 	workers: 2,
 	retries: process.env.CI ? 1 : 0,

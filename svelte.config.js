@@ -9,7 +9,9 @@ const config = {
 		runes: ({ filename }) => (filename.split(/[/\\]/).includes('node_modules') ? undefined : true)
 	},
 	kit: {
-		adapter: adapter(),
+		// BUILD_DIR / KIT_OUT_DIR let parallel work trees build side by side without clobbering.
+		adapter: adapter({ out: process.env.BUILD_DIR ?? 'build' }),
+		outDir: process.env.KIT_OUT_DIR ?? '.svelte-kit',
 		typescript: {
 			// Type-check the reference tables, scripts and tool configs with the app's settings.
 			config: (tsconfig) => {

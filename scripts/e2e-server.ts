@@ -7,7 +7,8 @@ const smtpPort = Number(process.env.E2E_SMTP_PORT);
 const dataDir = process.env.E2E_DATA_DIR;
 if (!port || !smtpPort || !dataDir)
 	throw new Error('E2E_PORT, E2E_SMTP_PORT and E2E_DATA_DIR are set by playwright.config.ts');
-if (!existsSync('build/index.js')) throw new Error('Build the app first: npx vite build');
+const buildDir = process.env.BUILD_DIR ?? 'build';
+if (!existsSync(`${buildDir}/index.js`)) throw new Error('Build the app first: npx vite build');
 
 stackEnv({ dataDir, port, smtpPort });
 // Every test signs in from 127.0.0.1: the per-address cap would throttle the suite, not an attacker.
@@ -15,4 +16,4 @@ process.env.SIGNIN_LIMIT_IP_PER_MINUTE = '100000';
 process.env.FORM_LIMIT_IP_PER_MINUTE = '100000';
 await prepareDatabase({ seed: true });
 await startCatcher();
-startChild(process.execPath, ['build/index.js']);
+startChild(process.execPath, [`${buildDir}/index.js`]);
