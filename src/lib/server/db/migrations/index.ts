@@ -1,6 +1,7 @@
 import type { QueryInterface } from 'sequelize';
 import * as foundation from './0001-foundation';
 import * as apiTokens from './0002-api-tokens';
+import * as settingsRecords from './0003-settings-records';
 
 export interface Migration {
 	name: string;
@@ -12,5 +13,6 @@ export interface Migration {
 // Append new migrations at the end; never edit one that has shipped.
 export const migrations: Migration[] = [
 	{ name: '0001-foundation', ...foundation },
-	{ name: '0002-api-tokens', ...apiTokens }
+	{ name: '0002-api-tokens', ...apiTokens },
+	{ name: '0003-settings-records', ...settingsRecords }
 ];
