@@ -184,7 +184,7 @@ export function parseFiller(text: unknown): FillerResult {
 		return { ok: false, message: `Enter an AWS filler classification. ${EXAMPLES}` };
 	const raw = text.trim();
 	const s = normalise(raw);
-	let m = /^ER(70|48)S-?([2-7]|G)$/.exec(s);
+	let m = /^ER(70|48)S-?(\d{1,2}|G)$/.exec(s);
 	if (m) return a5_18(m[1] ?? '70', m[2] ?? '', raw);
 	m = /^ER(80|90)S-?(D2|B2|B3|NI1|NI2|G)$/.exec(s);
 	if (m) {

@@ -8,7 +8,7 @@ import { AWS_D1_1_TABLE_3_3, CE_GUIDANCE, IIW_CE } from '$reference/sources';
 import type { CheckContext } from './context';
 import { isNum, round, sourceOf, type Finding, type FindingStatus } from './findings';
 import type { Chemistry } from './settings';
-import { cToF, formatLength, formatTemperature, MM_PER_IN } from './units';
+import { cToF, formatLength, formatTemperature, MM_PER_IN, type UnitSystem } from './units';
 
 const pct = (n: unknown): number => (isNum(n) && n >= 0 && n <= 100 ? n : 0);
 
@@ -59,10 +59,16 @@ const inBand = (t: number, b: PreheatRow['in']): boolean =>
 
 /**
  * D1.1:2015 Table 3.3 category B minimum for the thickness of the thickest part, or null below
- * 1/8 in (3 mm), where the table does not apply. Bands use the inch edges.
+ * 1/8 in (3 mm), where the table does not apply. The band edges are the inch ones for imperial
+ * users and the table's own mm ones for metric users (20 mm is "3 to 20 incl.", though it is a
+ * little over 3/4 in).
  */
-export function d11MinimumPreheat(thicknessMm: number): PreheatRow | null {
+export function d11MinimumPreheat(
+	thicknessMm: number,
+	system: UnitSystem = 'imperial'
+): PreheatRow | null {
 	if (!isNum(thicknessMm) || thicknessMm <= 0) return null;
+	if (system === 'metric') return D1_1_CATEGORY_B.find((r) => inBand(thicknessMm, r.mm)) ?? null;
 	const t = thicknessMm / MM_PER_IN;
 	return D1_1_CATEGORY_B.find((r) => inBand(t, r.in)) ?? null;
 }
@@ -74,7 +80,7 @@ export function checkPreheat(ctx: CheckContext): Finding | null {
 	if (ctx.metal?.row && !ctx.metal.d11CategoryB) return null;
 	// Category B covers low-hydrogen processes; SMAW with other electrodes is category A.
 	if (process === 'SMAW' && ctx.filler && ctx.filler.fNumber !== 4) return null;
-	const row = d11MinimumPreheat(thicknessMm);
+	const row = d11MinimumPreheat(thicknessMm, ctx.system);
 	if (!row) return null;
 	const minC = row.minC;
 	const shown = formatTemperature(preheatC, ctx.system);

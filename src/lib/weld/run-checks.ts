@@ -237,7 +237,9 @@ function derive(ctx: CheckContext): Derived {
 	if (ctx.metal)
 		d.baseMetal = { family: ctx.metal.family, pNumber: ctx.metal.pNumber, group: ctx.metal.group };
 	const pre =
-		ctx.family === 'carbon-steel' && isNum(s.thicknessMm) ? d11MinimumPreheat(s.thicknessMm) : null;
+		ctx.family === 'carbon-steel' && isNum(s.thicknessMm)
+			? d11MinimumPreheat(s.thicknessMm, ctx.system)
+			: null;
 	const ce = carbonEquivalentIIW(s.chemistry);
 	if (pre)
 		d.preheat = {

@@ -385,7 +385,10 @@ export function formatSpeed(
 ): string {
 	if (!finite(mmPerS)) return '–';
 	if (system === 'imperial') return `${oneDecimalUnder10(mmPerSToSpeed(mmPerS, 'in/min'))} in/min`;
-	if (kind === 'wire') return `${trimZeros(mmPerSToSpeed(mmPerS, 'm/min').toFixed(1))} m/min`;
+	if (kind === 'wire') {
+		const m = mmPerSToSpeed(mmPerS, 'm/min');
+		return `${trimZeros(m.toFixed(m < 0.1 ? 3 : m < 1 ? 2 : 1))} m/min`;
+	}
 	return `${Math.round(mmPerSToSpeed(mmPerS, 'mm/min'))} mm/min`;
 }
 

@@ -1,0 +1,7 @@
+// Types for the convert-units 2.x test oracle (the package ships none).
+declare module 'convert-units' {
+	interface Conversion {
+		from(unit: string): { to(unit: string): number };
+	}
+	export default function convert(value: number): Conversion;
+}

@@ -1,0 +1,162 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import {
+	checkFillerClassification,
+	checkFillerVsBaseMetal,
+	fillerSuits,
+	parseFiller,
+	type Filler
+} from './filler';
+
+const get = (text: string): Filler => {
+	const r = parseFiller(text);
+	if (!r.ok) throw new Error(r.message);
+	return r.filler;
+};
+
+describe('AWS A5.18 carbon steel solid wire and rod', () => {
+	it('ER70S-6 -> 70 ksi, F-6, A-1, carbon steel', () => {
+		const f = get('ER70S-6');
+		expect(f.spec).toBe('AWS A5.18');
+		expect(f.minTensileKsi).toBe(70); // AWS A5.18: "70" = 70 ksi minimum tensile
+		expect(f.fNumber).toBe(6); // ASME BPVC IX QW-432: A5.18 is F-6
+		expect(f.aNumber).toBe(1); // ASME BPVC IX QW-442: A-1 (mild steel)
+		expect(f.family).toBe('carbon-steel');
+		expect(f.fNumberSource.kind).toBe('published');
+	});
+	it('reads -2 and -3, loose spellings and a spec prefix', () => {
+		expect(get('ER70S-2').classification).toBe('ER70S-2');
+		expect(get('er70s3').classification).toBe('ER70S-3');
+		expect(get('AWS A5.18 ER70S-6').classification).toBe('ER70S-6');
+		expect(get(' ER70S–6 ').classification).toBe('ER70S-6');
+	});
+	it('ER48S-6 is the A5.18M metric twin of ER70S-6', () => {
+		const f = get('ER48S-6'); // AWS A5.18M: 48 = 480 MPa
+		expect(f.classification).toBe('ER70S-6');
+		expect(f.enteredAs).toBe('ER48S-6');
+		expect(f.fNumber).toBe(6);
+	});
+	it('ER70S-G reads, with the A-Number left to the deposit', () => {
+		const f = get('ER70S-G');
+		expect(f.aNumber).toBeNull();
+		expect(f.inTable).toBe(false);
+	});
+	it('an unknown suffix says what A5.18 lists', () => {
+		const r = parseFiller('ER70S-9');
+		expect(r.ok).toBe(false);
+		if (!r.ok) expect(r.message).toContain('-2, -3, -4, -6, -7');
+	});
+});
+
+describe('other specifications', () => {
+	it('A5.28 low-alloy: ER80S-D2, ER80S-B2', () => {
+		expect(get('ER80S-D2')).toMatchObject({
+			spec: 'AWS A5.28',
+			minTensileKsi: 80,
+			fNumber: 6,
+			family: 'low-alloy'
+		}); // QW-432: A5.28 is F-6
+		expect(get('ER80S-B2')).toMatchObject({ minTensileKsi: 80, fNumber: 6, aNumber: 3 }); // from memory: A-3 Cr-Mo
+	});
+	it('A5.9 stainless: ER308L, ER309L, ER316L (L = low carbon)', () => {
+		for (const c of ['ER308L', 'ER309L', 'ER316L']) {
+			const f = get(c);
+			expect(f).toMatchObject({
+				spec: 'AWS A5.9',
+				family: 'stainless',
+				fNumber: 6,
+				aNumber: 8,
+				minTensileKsi: null
+			}); // QW-432 F-6; A-8
+			expect(f.meaning).toContain('low carbon');
+		}
+		expect(get('ER308LSi').classification).toBe('ER308LSi');
+		expect(get('ER347').inTable).toBe(false);
+	});
+	it('A5.10 aluminium: ER4043 F-23, ER5356 F-22, no A-Number', () => {
+		expect(get('ER4043')).toMatchObject({
+			spec: 'AWS A5.10',
+			family: 'aluminium',
+			fNumber: 23,
+			aNumber: null
+		}); // from memory
+		expect(get('ER5356')).toMatchObject({ fNumber: 22, aNumber: null }); // from memory
+		expect(get('R4043').classification).toBe('ER4043');
+		expect(parseFiller('ER9999').ok).toBe(false);
+	});
+	it('A5.20 flux-cored: E71T-1C (CO2), E71T-1M (argon mix), E71T-11 self-shielded', () => {
+		expect(get('E71T-1C')).toMatchObject({
+			spec: 'AWS A5.20',
+			minTensileKsi: 70,
+			fNumber: 6,
+			gas: 'CO2',
+			currents: ['DCEP']
+		});
+		expect(get('E71T-1M')).toMatchObject({ gas: 'Ar/CO2 75-80 %' });
+		expect(get('E71T-11')).toMatchObject({ gas: 'none', currents: ['DCEN'] });
+		expect(get('E70T-1C').meaning).toContain('flat and horizontal');
+		expect(parseFiller('E71T-1').ok).toBe(false); // gas letter needed
+	});
+	it('A5.1 covered electrodes: E7018 (F-4, low hydrogen), E6010 (F-3)', () => {
+		expect(get('E7018')).toMatchObject({
+			spec: 'AWS A5.1',
+			minTensileKsi: 70,
+			fNumber: 4,
+			aNumber: 1
+		}); // from memory: QW-432 F-4
+		expect(get('E7018-1 H4R').classification).toBe('E7018-1');
+		expect(get('E6010')).toMatchObject({ minTensileKsi: 60, fNumber: 3, currents: ['DCEP'] }); // from memory
+	});
+	it('malformed or empty input gets a clear message', () => {
+		for (const bad of [
+			'',
+			'hello',
+			'7018',
+			'ER',
+			'E71T-99C',
+			42,
+			null,
+			undefined,
+			'x'.repeat(100)
+		]) {
+			const r = parseFiller(bad);
+			expect(r.ok).toBe(false);
+			if (!r.ok) expect(r.message.length).toBeGreaterThan(10);
+		}
+	});
+});
+
+describe('filler against base metal family', () => {
+	it('matches and mismatches', () => {
+		expect(fillerSuits(get('ER70S-6'), 'carbon-steel')).toBe('ok');
+		expect(fillerSuits(get('ER70S-6'), 'stainless')).toBe('outside');
+		expect(fillerSuits(get('ER4043'), 'carbon-steel')).toBe('outside');
+		expect(fillerSuits(get('ER308L'), 'stainless')).toBe('ok');
+		expect(fillerSuits(get('ER309L'), 'carbon-steel')).toBe('caution'); // dissimilar-joint wire
+		expect(fillerSuits(get('ER80S-D2'), 'carbon-steel')).toBe('caution');
+	});
+	it('findings name the field', () => {
+		const f = checkFillerVsBaseMetal({
+			s: { process: 'GTAW' },
+			system: 'imperial',
+			filler: get('ER4043'),
+			family: 'stainless'
+		});
+		expect(f).toMatchObject({ status: 'outside', field: 'filler.classification' });
+		const c = checkFillerClassification({
+			s: { process: 'GTAW', filler: { classification: 'ER70S-6' } },
+			system: 'imperial'
+		});
+		expect(c?.message).toContain('70 ksi minimum tensile, F-6, A-1');
+		const bad = checkFillerClassification({
+			s: { process: 'GTAW', filler: { classification: 'nope' } },
+			system: 'imperial'
+		});
+		expect(bad?.status).toBe('caution');
+	});
+});
+
+it('never throws (fast-check)', () => {
+	fc.assert(fc.property(fc.anything(), (x) => void parseFiller(x)));
+	fc.assert(fc.property(fc.stringMatching(/^E?R?[0-9A-Z-]{0,10}$/), (x) => void parseFiller(x)));
+});
