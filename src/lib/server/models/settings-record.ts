@@ -64,7 +64,8 @@ export class SettingsRecord extends Model<
 	declare updatedAt: CreationOptional<Date>;
 }
 
-const real = { type: DataTypes.REAL, allowNull: true };
+// A fresh object per attribute: Sequelize writes the column name into the one it is given.
+const real = () => ({ type: DataTypes.REAL, allowNull: true });
 const str = (n: number) => ({ type: DataTypes.STRING(n), allowNull: true });
 
 SettingsRecord.init(
@@ -75,24 +76,24 @@ SettingsRecord.init(
 		process: { type: DataTypes.STRING(8), allowNull: false },
 		currentType: str(8),
 		transfer: str(16),
-		amps: real,
-		volts: real,
-		wireFeedMmPerS: real,
-		travelSpeedMmPerS: real,
+		amps: real(),
+		volts: real(),
+		wireFeedMmPerS: real(),
+		travelSpeedMmPerS: real(),
 		fillerClass: str(40),
-		fillerDiameterMm: real,
+		fillerDiameterMm: real(),
 		tungstenClass: str(20),
-		tungstenDiameterMm: real,
+		tungstenDiameterMm: real(),
 		gasName: str(60),
-		gasFlowLPerMin: real,
+		gasFlowLPerMin: real(),
 		baseMetalSpec: str(60),
 		baseMetalFamily: str(16),
 		pNumber: str(8),
-		thicknessMm: real,
+		thicknessMm: real(),
 		jointType: str(16),
 		position: str(4),
-		preheatC: real,
-		interpassC: real,
+		preheatC: real(),
+		interpassC: real(),
 		machine: str(80),
 		jobRef: str(80),
 		outcome: str(60),

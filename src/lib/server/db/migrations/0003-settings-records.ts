@@ -3,7 +3,7 @@ import { DataTypes, type QueryInterface } from 'sequelize';
 // Settings records in SI (mm, A, V, mm/s, L/min, °C) and their photos. Every index leads with
 // shop_id: every query of the list is scoped to one shop, then filtered or sorted.
 export async function up({ context: q }: { context: QueryInterface }) {
-	const real = { type: DataTypes.REAL, allowNull: true };
+	const real = () => ({ type: DataTypes.REAL, allowNull: true });
 	const str = (n: number) => ({ type: DataTypes.STRING(n), allowNull: true });
 	await q.createTable('settings_records', {
 		id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
@@ -20,24 +20,24 @@ export async function up({ context: q }: { context: QueryInterface }) {
 		process: { type: DataTypes.STRING(8), allowNull: false },
 		current_type: str(8),
 		transfer: str(16),
-		amps: real,
-		volts: real,
-		wire_feed_mm_per_s: real,
-		travel_speed_mm_per_s: real,
+		amps: real(),
+		volts: real(),
+		wire_feed_mm_per_s: real(),
+		travel_speed_mm_per_s: real(),
 		filler_class: str(40),
-		filler_diameter_mm: real,
+		filler_diameter_mm: real(),
 		tungsten_class: str(20),
-		tungsten_diameter_mm: real,
+		tungsten_diameter_mm: real(),
 		gas_name: str(60),
-		gas_flow_l_per_min: real,
+		gas_flow_l_per_min: real(),
 		base_metal_spec: str(60),
 		base_metal_family: str(16),
 		p_number: str(8),
-		thickness_mm: real,
+		thickness_mm: real(),
 		joint_type: str(16),
 		position: str(4),
-		preheat_c: real,
-		interpass_c: real,
+		preheat_c: real(),
+		interpass_c: real(),
 		machine: str(80),
 		job_ref: str(80),
 		outcome: str(60),

@@ -1,0 +1,9 @@
+// Settings records: every service takes the acting member and stays inside the member's shop.
+export { canEdit, CREATE_ROLES, isFrozen, VIEW_ROLES } from './access';
+export { compareIds, compareRecords, COMPARE_MAX } from './compare';
+export { recordsCsv } from './csv';
+export { recordJson } from './json';
+export { authorNames, fillersInUse, listRecords, PAGE_SIZE, plotPoints } from './list';
+export { MAX_PHOTOS, photosFrom } from './photos';
+export { getRecord, recordHistory, type RecordView } from './read';
+export { createRecord, findOwn, freezeRecord, removePhoto, updateRecord } from './save';

@@ -1,0 +1,202 @@
+// The list's query: filters and sort from the URL, always inside the actor's shop. The indexes
+// of migration 0003 lead with shop_id and cover each filter and sort.
+import { Op, type Order, type WhereOptions } from 'sequelize';
+import { parseLength, type UnitSystem } from '$lib/weld';
+import type { RecordFilterInput } from '$lib/schemas/settings-record';
+import type { SessionUser } from '../auth/session-user';
+import { SettingsRecord, User } from '../models';
+
+export const PAGE_SIZE = 25;
+/** A typed 1/8 in is 3.175 mm; stored values may differ in the last digits. */
+const EPSILON_MM = 0.005;
+
+export interface ResolvedFilters {
+	where: WhereOptions<SettingsRecord>;
+	/** Messages for filter values that could not be read (and were left out). */
+	problems: Partial<Record<'tmin' | 'tmax', string>>;
+}
+
+export function resolveFilters(
+	f: RecordFilterInput,
+	shopId: number,
+	system: UnitSystem
+): ResolvedFilters {
+	const problems: ResolvedFilters['problems'] = {};
+	const and: WhereOptions<SettingsRecord>[] = [{ shopId }];
+	if (f.process) and.push({ process: f.process });
+	if (f.family) and.push({ baseMetalFamily: f.family });
+	if (f.filler) and.push({ fillerClass: f.filler.toUpperCase() });
+	if (f.position) and.push({ position: f.position });
+	if (f.outcome) and.push({ outcomeKind: f.outcome });
+	if (f.author) and.push({ authorId: f.author });
+	if (f.from) and.push({ weldedOn: { [Op.gte]: f.from } });
+	if (f.to) and.push({ weldedOn: { [Op.lte]: f.to } });
+	for (const key of ['tmin', 'tmax'] as const) {
+		const text = f[key];
+		if (!text) continue;
+		const r = parseLength(text, system === 'metric' ? 'mm' : 'in');
+		if (!r.ok) {
+			problems[key] = r.message;
+			continue;
+		}
+		and.push({
+			thicknessMm:
+				key === 'tmin' ? { [Op.gte]: r.mm - EPSILON_MM } : { [Op.lte]: r.mm + EPSILON_MM }
+		});
+	}
+	if (f.q) {
+		// Every word must appear; '%' is dropped (SQLite's LIKE has no escape unless asked for one).
+		const words = f.q.toLowerCase().replace(/%/g, '').split(/\s+/).filter(Boolean).slice(0, 5);
+		for (const w of words) and.push({ searchText: { [Op.like]: `%${w}%` } });
+	}
+	return { where: { [Op.and]: and }, problems };
+}
+
+const SORT_COLUMNS: Record<RecordFilterInput['sort'], string> = {
+	weldedOn: 'weldedOn',
+	amps: 'amps',
+	thickness: 'thicknessMm',
+	process: 'process',
+	filler: 'fillerClass',
+	outcome: 'outcomeKind',
+	created: 'createdAt'
+};
+
+export function orderFor(f: Pick<RecordFilterInput, 'sort' | 'dir'>): Order {
+	const dir = f.dir === 'asc' ? 'ASC' : 'DESC';
+	return [
+		[SORT_COLUMNS[f.sort], dir],
+		['id', dir]
+	];
+}
+
+export interface ListRow {
+	id: number;
+	weldedOn: string;
+	process: string;
+	amps: number | null;
+	volts: number | null;
+	thicknessMm: number | null;
+	baseMetalSpec: string | null;
+	fillerClass: string | null;
+	position: string | null;
+	outcome: string | null;
+	outcomeKind: string | null;
+	cautionCount: number;
+	jobRef: string | null;
+	author: string;
+}
+
+export async function listRecords(actor: SessionUser, f: RecordFilterInput) {
+	const { where, problems } = resolveFilters(f, actor.shopId, actor.unitSystem);
+	const total = await SettingsRecord.count({ where });
+	const pages = Math.max(1, Math.ceil(total / PAGE_SIZE));
+	const page = Math.min(f.page, pages);
+	const rows = await SettingsRecord.findAll({
+		where,
+		order: orderFor(f),
+		limit: PAGE_SIZE,
+		offset: (page - 1) * PAGE_SIZE,
+		attributes: [
+			'id',
+			'weldedOn',
+			'process',
+			'amps',
+			'volts',
+			'thicknessMm',
+			'baseMetalSpec',
+			'fillerClass',
+			'position',
+			'outcome',
+			'outcomeKind',
+			'cautionCount',
+			'jobRef',
+			'authorId'
+		]
+	});
+	const names = await authorNames(actor.shopId);
+	const list: ListRow[] = rows.map((r) => ({
+		id: r.id,
+		weldedOn: r.weldedOn,
+		process: r.process,
+		amps: r.amps,
+		volts: r.volts,
+		thicknessMm: r.thicknessMm,
+		baseMetalSpec: r.baseMetalSpec,
+		fillerClass: r.fillerClass,
+		position: r.position,
+		outcome: r.outcome,
+		outcomeKind: r.outcomeKind,
+		cautionCount: r.cautionCount,
+		jobRef: r.jobRef,
+		author: names.get(r.authorId) ?? 'former member'
+	}));
+	return { rows: list, total, page, pages, problems };
+}
+
+/** Names of the shop's people, for the author column and the author filter. */
+export async function authorNames(shopId: number): Promise<Map<string, string>> {
+	const people = await User.findAll({
+		where: { shopId },
+		attributes: ['id', 'name'],
+		order: [['name', 'ASC']]
+	});
+	return new Map(people.map((p) => [p.id, p.name]));
+}
+
+/** The shop's fillers in use, for the filter's choices. */
+export async function fillersInUse(shopId: number): Promise<string[]> {
+	const rows = await SettingsRecord.findAll({
+		where: { shopId, fillerClass: { [Op.ne]: null } },
+		attributes: ['fillerClass'],
+		group: ['fillerClass'],
+		order: [['fillerClass', 'ASC']],
+		limit: 200,
+		raw: true
+	});
+	return rows.map((r) => r.fillerClass).filter((x): x is string => !!x);
+}
+
+export const PLOT_LIMIT = 2000;
+
+export interface PlotPoint {
+	id: number;
+	thicknessMm: number;
+	amps: number;
+	outcomeKind: string | null;
+	label: string;
+}
+
+/** Amps against thickness for the filtered records that have both. */
+export async function plotPoints(actor: SessionUser, f: RecordFilterInput) {
+	const { where, problems } = resolveFilters(f, actor.shopId, actor.unitSystem);
+	const both = {
+		[Op.and]: [where, { amps: { [Op.ne]: null } }, { thicknessMm: { [Op.ne]: null } }]
+	};
+	const [total, rows] = await Promise.all([
+		SettingsRecord.count({ where }),
+		SettingsRecord.findAll({
+			where: both,
+			order: orderFor(f),
+			limit: PLOT_LIMIT,
+			attributes: [
+				'id',
+				'thicknessMm',
+				'amps',
+				'outcomeKind',
+				'process',
+				'fillerClass',
+				'weldedOn'
+			],
+			raw: true
+		})
+	]);
+	const points: PlotPoint[] = rows.map((r) => ({
+		id: r.id,
+		thicknessMm: r.thicknessMm as number,
+		amps: r.amps as number,
+		outcomeKind: r.outcomeKind,
+		label: `#${r.id} ${r.process} ${r.fillerClass ?? ''} ${r.weldedOn}`.replace(/\s+/g, ' ')
+	}));
+	return { points, total, problems, capped: points.length >= PLOT_LIMIT };
+}
