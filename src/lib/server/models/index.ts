@@ -34,3 +34,12 @@ export {
 	User,
 	VerificationToken
 };
+
+export {
+	ContinuityEntry,
+	LapseNotice,
+	Qualification,
+	QualificationConfirmation,
+	VerificationLink,
+	Welder
+} from './welders';

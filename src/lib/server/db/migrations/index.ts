@@ -2,6 +2,7 @@ import type { QueryInterface } from 'sequelize';
 import * as foundation from './0001-foundation';
 import * as apiTokens from './0002-api-tokens';
 import * as settingsRecords from './0003-settings-records';
+import * as welders from './0005-welders';
 
 export interface Migration {
 	name: string;
@@ -14,5 +15,6 @@ export interface Migration {
 export const migrations: Migration[] = [
 	{ name: '0001-foundation', ...foundation },
 	{ name: '0002-api-tokens', ...apiTokens },
-	{ name: '0003-settings-records', ...settingsRecords }
+	{ name: '0003-settings-records', ...settingsRecords },
+	{ name: '0005-welders', ...welders }
 ];
