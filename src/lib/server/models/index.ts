@@ -2,9 +2,13 @@ import { ApiToken } from './api-token';
 import { AuditEvent } from './audit-event';
 import { Account, Session, VerificationToken } from './auth-tables';
 import { Invite } from './invite';
+import { Procedure, ProcedureNumbering } from './procedure';
+import { ProcedureRevision, RevisionPqr, RevisionRecord } from './procedure-revision';
+import { Pqr, PqrAddendum, PqrReport } from './pqr';
 import { SettingsPhoto } from './settings-photo';
 import { SettingsRecord } from './settings-record';
 import { Shop } from './shop';
+import { SignOff } from './sign-off';
 import { User } from './user';
 
 Shop.hasMany(User, { foreignKey: 'shopId' });
@@ -22,15 +26,33 @@ SettingsRecord.belongsTo(User, { foreignKey: 'authorId', as: 'author' });
 SettingsRecord.hasMany(SettingsPhoto, { foreignKey: 'recordId', as: 'photos' });
 SettingsPhoto.belongsTo(SettingsRecord, { foreignKey: 'recordId' });
 
+// Procedures (issue #5): revisions, their PQR and record links, sign-offs; PQRs with reports.
+Procedure.hasMany(ProcedureRevision, { foreignKey: 'procedureId', as: 'revisions' });
+ProcedureRevision.belongsTo(Procedure, { foreignKey: 'procedureId' });
+ProcedureRevision.hasMany(SignOff, { foreignKey: 'revisionId', as: 'signOffs' });
+ProcedureRevision.hasMany(RevisionPqr, { foreignKey: 'revisionId', as: 'pqrLinks' });
+ProcedureRevision.hasMany(RevisionRecord, { foreignKey: 'revisionId', as: 'recordLinks' });
+Pqr.hasMany(PqrReport, { foreignKey: 'pqrId', as: 'reports' });
+Pqr.hasMany(PqrAddendum, { foreignKey: 'pqrId', as: 'addenda' });
+
 export {
 	Account,
 	ApiToken,
 	AuditEvent,
 	Invite,
+	Pqr,
+	PqrAddendum,
+	PqrReport,
+	Procedure,
+	ProcedureNumbering,
+	ProcedureRevision,
+	RevisionPqr,
+	RevisionRecord,
 	Session,
 	SettingsPhoto,
 	SettingsRecord,
 	Shop,
+	SignOff,
 	User,
 	VerificationToken
 };

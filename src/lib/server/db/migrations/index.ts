@@ -2,6 +2,7 @@ import type { QueryInterface } from 'sequelize';
 import * as foundation from './0001-foundation';
 import * as apiTokens from './0002-api-tokens';
 import * as settingsRecords from './0003-settings-records';
+import * as procedures from './0004-procedures';
 import * as welders from './0005-welders';
 
 export interface Migration {
@@ -16,5 +17,6 @@ export const migrations: Migration[] = [
 	{ name: '0001-foundation', ...foundation },
 	{ name: '0002-api-tokens', ...apiTokens },
 	{ name: '0003-settings-records', ...settingsRecords },
+	{ name: '0004-procedures', ...procedures },
 	{ name: '0005-welders', ...welders }
 ];
