@@ -93,6 +93,7 @@ export function checkHeatInput(ctx: CheckContext): Finding | null {
 	const unit = imperial ? 'J/in' : 'J/mm';
 	const value = Math.round(jPerMm * scale);
 	const limit = Math.round(max.jPerMm * scale);
+	if (!Number.isFinite(value) || !Number.isFinite(limit)) return null;
 	const over = jPerMm > max.jPerMm * (1 + 1e-9);
 	const how =
 		max.basis === 'iso'

@@ -145,7 +145,9 @@ export function welderPositions(tests: unknown): PositionsQualified {
 		const k = typeof t === 'string' ? t.trim().toUpperCase() : '';
 		const rows = QW_461_9.filter((r) => r.test === k);
 		if (rows.length === 0) {
-			unknown.push(typeof t === 'string' ? t.slice(0, 10) : String(t).slice(0, 10));
+			unknown.push(
+				typeof t === 'string' ? t.slice(0, 10) : typeof t === 'number' ? String(t) : '?'
+			);
 			continue;
 		}
 		for (const r of rows) {

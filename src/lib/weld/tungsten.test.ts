@@ -100,7 +100,7 @@ it('never throws (fast-check)', () => {
 			fc.constantFrom('DCEN', 'AC', 'DCEP' as const),
 			(x, d, c) => {
 				parseTungsten(x);
-				tungstenAmpRanges(String(x), d, c as 'DCEN');
+				tungstenAmpRanges(x as string, d, c as 'DCEN');
 			}
 		)
 	);

@@ -14,7 +14,8 @@ import { formatLength } from './units';
 export type TungstenResult =
 	{ ok: true; tungsten: TungstenClassRow } | { ok: false; message: string };
 
-const key = (s: string): string => s.toUpperCase().replace(/[\s_–—−-]/g, '');
+const key = (s: unknown): string =>
+	typeof s === 'string' ? s.toUpperCase().replace(/[\s_–—−-]/g, '') : '';
 
 const LOOKUP = new Map<string, TungstenClassRow>();
 for (const row of TUNGSTEN_CLASSES) {
