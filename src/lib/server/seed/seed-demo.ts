@@ -2,6 +2,7 @@ import { hashPassword } from '../auth/password';
 import { write } from '../db/write-queue';
 import { Shop, User } from '../models';
 import { DEMO_PEOPLE, DEMO_SHOP, OTHER_PEOPLE, OTHER_SHOP, type DemoPerson } from './demo-people';
+import { seedWelders } from './seed-welders';
 
 async function seedShop(name: string, people: DemoPerson[]): Promise<Shop> {
 	const hashes = await Promise.all(people.map((p) => hashPassword(p.password)));
@@ -33,5 +34,6 @@ async function seedShop(name: string, people: DemoPerson[]): Promise<Shop> {
 export async function seedDemo(): Promise<{ shop: Shop; other: Shop }> {
 	const shop = await seedShop(DEMO_SHOP, DEMO_PEOPLE);
 	const other = await seedShop(OTHER_SHOP, OTHER_PEOPLE);
+	await seedWelders(shop);
 	return { shop, other };
 }

@@ -1,0 +1,158 @@
+// Demo welders of the invented shop, with qualifications in every state relative to the day the
+// seed runs: current, lapsing within a week (Priya Venn's GMAW, for the reminder job), and
+// lapsed. Idempotent: a welder whose stamp exists is left as it is.
+import { addCalendarMonths, formatDate, parseDate } from '$lib/weld/continuity';
+import { write } from '../db/write-queue';
+import { ContinuityEntry, Qualification, User, Welder, type Shop } from '../models';
+import { addDays, localDay } from '../welders/dates';
+
+type Q = Omit<
+	Qualification['_creationAttributes'],
+	'shopId' | 'welderId' | 'createdById' | 'testDate'
+> & { testDate: string };
+
+interface DemoWelder {
+	name: string;
+	stamp: string;
+	email?: string;
+	/** The demo account to link, by e-mail. */
+	account?: string;
+	qualifications: Q[];
+	/** [process, days ago] of logged uses. */
+	uses: [string, number][];
+}
+
+const IN = 25.4;
+/** The test date whose six months end `days` from today (clamped month ends land earlier). */
+function lapsingIn(today: string, days: number): string {
+	const target = parseDate(addDays(today, days))!;
+	return formatDate(addCalendarMonths(target, -6));
+}
+
+function demo(today: string): DemoWelder[] {
+	const plate = (
+		process: 'GTAW' | 'GMAW' | 'FCAW' | 'SMAW',
+		positions: string,
+		testDate: string,
+		extra: Partial<Q> = {}
+	): Q => ({
+		process,
+		code: 'ASME IX',
+		testDate,
+		wpsRef: process === 'GTAW' ? 'WPS-GT-01' : 'WPS-GM-03',
+		testPositions: positions,
+		couponType: 'plate',
+		couponDiameterMm: null,
+		couponThicknessMm: 0.375 * IN,
+		depositThicknessMm: 0.375 * IN,
+		depositLayers: 3,
+		lengthUnit: 'in',
+		fNumber: 6,
+		fillerClass: process === 'SMAW' ? 'E7018' : 'ER70S-6',
+		backing: 'with',
+		currentType: process === 'GTAW' ? 'DCEN' : 'DCEP',
+		results: 'Visual acceptable; 2 face and 2 root bends acceptable',
+		witnessedBy: 'Mirela Sand',
+		...extra
+	});
+	return [
+		{
+			name: 'Tomas Whitlow',
+			stamp: 'LTR-07',
+			account: 'tomas@larkspur.example',
+			qualifications: [
+				plate('GTAW', '3G', addDays(today, -400)),
+				plate('GMAW', '2G', addDays(today, -90))
+			],
+			uses: [
+				['GTAW', 12],
+				['GTAW', 60],
+				['GMAW', 20]
+			]
+		},
+		{
+			name: 'Priya Venn',
+			stamp: 'LTR-11',
+			account: 'priya@larkspur.example',
+			qualifications: [
+				plate('GMAW', '3G', lapsingIn(today, 5)),
+				plate('GTAW', '2G', addDays(today, -30))
+			],
+			uses: []
+		},
+		{
+			name: 'Arlo Brandt',
+			stamp: 'LTR-14',
+			email: 'arlo.brandt@larkspur.example',
+			qualifications: [
+				plate('SMAW', '4G', addDays(today, -300), { fNumber: 4 }),
+				plate('FCAW', '3G', addDays(today, -250), { fillerClass: 'E71T-1C' })
+			],
+			uses: [['SMAW', 210]]
+		},
+		{
+			name: 'Jun Halloran',
+			stamp: 'LTR-19',
+			qualifications: [
+				{
+					...plate('GTAW', '6G', addDays(today, -45)),
+					couponType: 'pipe',
+					couponDiameterMm: 2.375 * IN,
+					couponThicknessMm: 0.154 * IN,
+					depositThicknessMm: 0.154 * IN,
+					depositLayers: 2,
+					wpsRef: 'WPS-GT-04'
+				}
+			],
+			uses: [['GTAW', 3]]
+		}
+	];
+}
+
+export async function seedWelders(shop: Shop, now: Date = new Date()): Promise<void> {
+	const today = localDay(now);
+	await write(async (t) => {
+		const admin = await User.findOne({
+			where: { shopId: shop.id, role: 'admin' },
+			order: [['createdAt', 'ASC']],
+			transaction: t
+		});
+		if (!admin) return;
+		for (const d of demo(today)) {
+			if (await Welder.findOne({ where: { shopId: shop.id, stamp: d.stamp }, transaction: t }))
+				continue;
+			const user = d.account
+				? await User.findOne({ where: { email: d.account, shopId: shop.id }, transaction: t })
+				: null;
+			const w = await Welder.create(
+				{
+					shopId: shop.id,
+					name: d.name,
+					stamp: d.stamp,
+					email: d.email ?? null,
+					userId: user?.id ?? null
+				},
+				{ transaction: t }
+			);
+			for (const q of d.qualifications)
+				await Qualification.create(
+					{ ...q, shopId: shop.id, welderId: w.id, createdById: admin.id },
+					{ transaction: t }
+				);
+			for (const [process, ago] of d.uses)
+				await ContinuityEntry.create(
+					{
+						shopId: shop.id,
+						welderId: w.id,
+						process: process as Q['process'],
+						usedOn: addDays(today, -ago),
+						source: 'manual',
+						note: 'Demo: shop floor job',
+						recordedById: admin.id,
+						recordedByName: admin.name
+					},
+					{ transaction: t }
+				);
+		}
+	});
+}

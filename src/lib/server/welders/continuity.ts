@@ -1,0 +1,183 @@
+// The continuity log: dated uses of a process per welder, from a booth tap or entered by an
+// engineer or admin, and the ISO 9606-1 six-monthly confirmations.
+import type { RequestEvent } from '@sveltejs/kit';
+import { QueryTypes } from 'sequelize';
+import type { Process } from '$lib/weld';
+import { parseDate } from '$lib/weld/continuity';
+import { audit } from '../audit';
+import { sequelize, write } from '../db';
+import { ContinuityEntry, Qualification, QualificationConfirmation, User, Welder } from '../models';
+import type { ContinuitySource } from '../models/continuity-entry';
+import { ForbiddenError, NotFoundError, RefusedError } from '../people/errors';
+import { actingMember, MANAGE_ROLES } from './access';
+import { localDay } from './dates';
+import { findWelder } from './welders';
+
+export interface RecordContinuityInput {
+	shopId: number;
+	/** The welder, or the signed-in account linked to one (the booth view knows only the user). */
+	welderId?: number;
+	userId?: string;
+	process: Process;
+	/** 'YYYY-MM-DD'; the server's today when left out. */
+	date?: string;
+	source: ContinuitySource;
+	/** Required for manual entries: what was welded. */
+	note?: string;
+	/** Who records it: the welder themself for a booth tap, an engineer or admin for manual. */
+	actor: { id: string; name?: string };
+	event?: RequestEvent | null;
+}
+
+export interface RecordedUse {
+	id: number;
+	welderId: number;
+	process: Process;
+	usedOn: string;
+	source: ContinuitySource;
+	/** False when the welder had already logged this process that day: nothing changed. */
+	created: boolean;
+}
+
+const PROCESSES: readonly string[] = ['GTAW', 'GMAW', 'FCAW', 'SMAW'];
+
+/**
+ * Logs that a welder used a process on a day. Idempotent: once per welder, process and day (a
+ * unique index and INSERT OR IGNORE inside the write queue), so a double tap changes nothing.
+ * Throws NotFoundError (no such welder in the shop), ForbiddenError (the actor may not log for
+ * this welder) or RefusedError (bad date, process or missing note).
+ */
+export async function recordContinuity(input: RecordContinuityInput): Promise<RecordedUse> {
+	const today = localDay();
+	const usedOn = input.date ?? today;
+	if (!parseDate(usedOn)) throw new RefusedError('Enter the date as YYYY-MM-DD.', 'usedOn');
+	if (usedOn > today) throw new RefusedError('The date is in the future.', 'usedOn');
+	if (!PROCESSES.includes(input.process)) throw new RefusedError('Unknown process.', 'process');
+	const note = input.note?.trim().slice(0, 500) || null;
+	if (input.source === 'manual' && !note)
+		throw new RefusedError('Say what the welder welded (job, part or WPS).', 'note');
+
+	return write(async (t) => {
+		let welder: Welder | null;
+		if (input.welderId !== undefined) welder = await findWelder(input.shopId, input.welderId, t);
+		else if (input.userId)
+			welder = await Welder.findOne({
+				where: { shopId: input.shopId, userId: input.userId },
+				transaction: t
+			});
+		else welder = null;
+		if (!welder) throw new NotFoundError('No welder of your shop is linked to this account.');
+		if (!welder.active) throw new RefusedError('This welder is marked inactive.');
+
+		let recorder: User;
+		if (input.source === 'manual') {
+			recorder = await actingMember({ id: input.actor.id, shopId: input.shopId }, MANAGE_ROLES, t);
+		} else {
+			const u = await User.findOne({
+				where: { id: input.actor.id, shopId: input.shopId, active: true },
+				transaction: t
+			});
+			if (!u || u.id !== welder.userId)
+				throw new ForbiddenError('Only the welder can log their own use at the booth.');
+			recorder = u;
+		}
+
+		const now = new Date();
+		await ContinuityEntry.bulkCreate(
+			[
+				{
+					shopId: input.shopId,
+					welderId: welder.id,
+					process: input.process,
+					usedOn,
+					source: input.source,
+					note,
+					recordedById: recorder.id,
+					recordedByName: recorder.name,
+					createdAt: now,
+					updatedAt: now
+				}
+			],
+			{ ignoreDuplicates: true, transaction: t }
+		);
+		const [{ n }] = (await sequelize.query('SELECT changes() AS n', {
+			type: QueryTypes.SELECT,
+			transaction: t
+		})) as [{ n: number }];
+		const entry = await ContinuityEntry.findOne({
+			where: { welderId: welder.id, process: input.process, usedOn },
+			transaction: t,
+			rejectOnEmpty: true
+		});
+		const created = n > 0;
+		if (created)
+			await audit(
+				{
+					shopId: input.shopId,
+					actor: { id: recorder.id, name: recorder.name },
+					action: 'continuity.recorded',
+					objectType: 'welder',
+					objectId: welder.id,
+					after: { process: input.process, usedOn, source: input.source, note }
+				},
+				input.event ?? null,
+				t
+			);
+		return {
+			id: entry.id,
+			welderId: welder.id,
+			process: entry.process,
+			usedOn: entry.usedOn,
+			source: entry.source,
+			created
+		};
+	});
+}
+
+/** ISO 9606-1: the employer's responsible person confirms the qualification (every 6 months). */
+export async function recordConfirmation(
+	actor: { id: string; shopId: number },
+	welderId: number,
+	input: { qualificationId: number; confirmedOn: string; responsiblePerson: string; note: string },
+	event: RequestEvent | null = null
+): Promise<{ id: number }> {
+	if (input.confirmedOn > localDay())
+		throw new RefusedError('The date is in the future.', 'confirmedOn');
+	return write(async (t) => {
+		const me = await actingMember(actor, MANAGE_ROLES, t);
+		const q = await Qualification.findOne({
+			where: { id: input.qualificationId, welderId, shopId: actor.shopId },
+			transaction: t
+		});
+		if (!q) throw new NotFoundError('No such qualification for this welder.');
+		if (q.code !== 'ISO 9606-1')
+			throw new RefusedError(
+				'Confirmations are for ISO 9606-1 qualifications; log a use instead.',
+				'qualificationId'
+			);
+		const c = await QualificationConfirmation.create(
+			{
+				shopId: actor.shopId,
+				qualificationId: q.id,
+				confirmedOn: input.confirmedOn,
+				responsiblePerson: input.responsiblePerson,
+				note: input.note || null,
+				recordedById: me.id
+			},
+			{ transaction: t }
+		);
+		await audit(
+			{
+				shopId: actor.shopId,
+				actor: me,
+				action: 'qualification.confirmed',
+				objectType: 'qualification',
+				objectId: q.id,
+				after: { confirmedOn: input.confirmedOn, responsiblePerson: input.responsiblePerson }
+			},
+			event,
+			t
+		);
+		return { id: c.id };
+	});
+}
