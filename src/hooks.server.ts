@@ -4,9 +4,13 @@ import { randomBytes } from 'node:crypto';
 import { authHandle } from '$lib/server/auth/auth-js';
 import { currentMember } from '$lib/server/auth/current-member';
 import { migrate } from '$lib/server/db';
+import { startJobTimers } from '$lib/server/jobs/timer';
+import { building } from '$app/environment';
 
 export const init: ServerInit = async () => {
 	await migrate();
+	// The hourly lapse-notice run; never while building (BEADLINE_JOBS=off leaves it to cron).
+	if (!building) startJobTimers();
 };
 
 const securityHeaders: Handle = async ({ event, resolve }) => {
