@@ -14,10 +14,10 @@ import { inToMm, mmPerSToSpeed, speedToMmPerS } from './units';
 describe('amps for thickness', () => {
 	it('GTAW carbon steel: about 1 A per 0.001 in, band ±25 %', () => {
 		// common practice, no source: 1/8 in -> 125 A, band 93.75-156.25 rounded
-		expect(thicknessAmpBand('GTAW', inToMm(1 / 8))?.band).toEqual({ min: 94, max: 156 });
+		expect(thicknessAmpBand('GTAW', inToMm(1 / 8))?.band).toEqual({ min: 94, max: 156 }); // common practice, no source
 		// common practice, no source: 1/16 in -> 62.5 A
-		expect(thicknessAmpBand('GTAW', inToMm(1 / 16))?.band).toEqual({ min: 47, max: 78 });
-		expect(thicknessAmpBand('GTAW', inToMm(1 / 8))?.source.kind).toBe('common practice');
+		expect(thicknessAmpBand('GTAW', inToMm(1 / 16))?.band).toEqual({ min: 47, max: 78 }); // common practice, no source
+		expect(thicknessAmpBand('GTAW', inToMm(1 / 8))?.source.kind).toBe('common practice'); // common practice, no source
 	});
 	it('stainless about 10 % lower, aluminium (AC) about 25 % higher', () => {
 		// common practice, no source: 112.5 A centre for stainless, 156.25 A for aluminium
@@ -31,24 +31,24 @@ describe('amps for thickness', () => {
 		});
 	});
 	it('the GTAW rule stops at 1/4 in (multi-pass)', () => {
-		expect(thicknessAmpBand('GTAW', inToMm(1 / 4))).not.toBeNull();
-		expect(thicknessAmpBand('GTAW', inToMm(5 / 16))).toBeNull();
+		expect(thicknessAmpBand('GTAW', inToMm(1 / 4))).not.toBeNull(); // common practice, no source
+		expect(thicknessAmpBand('GTAW', inToMm(5 / 16))).toBeNull(); // common practice, no source
 	});
 	it('GMAW by thickness band', () => {
 		// common practice, compiled band table
-		expect(thicknessAmpBand('GMAW', inToMm(3 / 16))?.band).toEqual({ min: 140, max: 220 });
-		expect(thicknessAmpBand('GMAW', inToMm(0.0598))?.band).toEqual({ min: 70, max: 120 });
+		expect(thicknessAmpBand('GMAW', inToMm(3 / 16))?.band).toEqual({ min: 140, max: 220 }); // common practice, compiled bands
+		expect(thicknessAmpBand('GMAW', inToMm(0.0598))?.band).toEqual({ min: 70, max: 120 }); // common practice, compiled bands
 		expect(thicknessAmpBand('GMAW', inToMm(3 / 16), 'stainless')?.band).toEqual({
 			min: 126,
 			max: 198
 		});
-		expect(thicknessAmpBand('GMAW', inToMm(3 / 16), 'aluminium')).toBeNull();
-		expect(thicknessAmpBand('GMAW', inToMm(1))).toBeNull();
+		expect(thicknessAmpBand('GMAW', inToMm(3 / 16), 'aluminium')).toBeNull(); // common practice, compiled bands
+		expect(thicknessAmpBand('GMAW', inToMm(1))).toBeNull(); // common practice, compiled bands
 	});
 	it('no band for SMAW/FCAW or unusable thickness', () => {
 		expect(thicknessAmpBand('SMAW', 6)).toBeNull();
-		expect(thicknessAmpBand('GTAW', -1)).toBeNull();
-		expect(thicknessAmpBand('GTAW', NaN)).toBeNull();
+		expect(thicknessAmpBand('GTAW', -1)).toBeNull(); // common practice, no source
+		expect(thicknessAmpBand('GTAW', NaN)).toBeNull(); // common practice, no source
 	});
 	it('the finding reads like the contract example', () => {
 		const f = checkAmpsVsThickness({
@@ -85,12 +85,12 @@ describe('amps for wire and rod size', () => {
 			min: 70,
 			max: 130
 		});
-		expect(fillerAmpBand('GMAW', inToMm(0.03), 'spray')?.band).toEqual({ min: 150, max: 265 });
+		expect(fillerAmpBand('GMAW', inToMm(0.03), 'spray')?.band).toEqual({ min: 150, max: 265 }); // common practice (equipment data)
 		expect(fillerAmpBand('GMAW', inToMm(0.035), 'short-circuit')?.band).toEqual({
 			min: 80,
 			max: 190
 		});
-		expect(fillerAmpBand('GMAW', inToMm(0.035), 'spray')?.band).toEqual({ min: 175, max: 290 });
+		expect(fillerAmpBand('GMAW', inToMm(0.035), 'spray')?.band).toEqual({ min: 175, max: 290 }); // common practice (equipment data)
 		expect(fillerAmpBand('GMAW', inToMm(0.045), 'short-circuit')?.band).toEqual({
 			min: 100,
 			max: 225
@@ -101,16 +101,16 @@ describe('amps for wire and rod size', () => {
 		});
 		expect(fillerAmpBand('GMAW', inToMm(0.035))?.band).toEqual({ min: 80, max: 290 }); // no mode: both
 		expect(fillerAmpBand('GMAW', 0.9, 'short-circuit')?.band).toEqual({ min: 80, max: 190 }); // 0.9 mm = 0.035 in
-		expect(fillerAmpBand('GMAW', inToMm(0.024), 'spray')).toBeNull();
+		expect(fillerAmpBand('GMAW', inToMm(0.024), 'spray')).toBeNull(); // common practice (equipment data)
 	});
 	it('GTAW rod (common practice)', () => {
-		expect(fillerAmpBand('GTAW', inToMm(1 / 16))?.band).toEqual({ min: 20, max: 90 });
-		expect(fillerAmpBand('GTAW', 2.4)?.band).toEqual({ min: 65, max: 115 });
-		expect(fillerAmpBand('GTAW', 3.2)?.band).toEqual({ min: 100, max: 165 });
-		expect(fillerAmpBand('GTAW', 5)).toBeNull();
+		expect(fillerAmpBand('GTAW', inToMm(1 / 16))?.band).toEqual({ min: 20, max: 90 }); // common practice, no source
+		expect(fillerAmpBand('GTAW', 2.4)?.band).toEqual({ min: 65, max: 115 }); // common practice, no source
+		expect(fillerAmpBand('GTAW', 3.2)?.band).toEqual({ min: 100, max: 165 }); // common practice, no source
+		expect(fillerAmpBand('GTAW', 5)).toBeNull(); // common practice, no source
 	});
 	it('SMAW E7018-type electrode (from memory) only for F-4 electrodes', () => {
-		expect(fillerAmpBand('SMAW', inToMm(1 / 8))?.source.kind).toBe('from memory');
+		expect(fillerAmpBand('SMAW', inToMm(1 / 8))?.source.kind).toBe('from memory'); // from memory
 		const e6010 = { classification: 'E6010', fNumber: 3 } as never;
 		expect(
 			checkAmpsVsFiller({
@@ -143,11 +143,11 @@ describe('amps for wire and rod size', () => {
 
 describe('wire feed speed and amps', () => {
 	it('in/min per amp by wire size (common practice)', () => {
-		expect(wfsPerAmp(inToMm(0.023))?.inPerMinPerAmp).toBe(3.5);
-		expect(wfsPerAmp(inToMm(0.024))?.inPerMinPerAmp).toBe(3.5);
-		expect(wfsPerAmp(inToMm(0.03))?.inPerMinPerAmp).toBe(2.0);
-		expect(wfsPerAmp(inToMm(0.035))?.inPerMinPerAmp).toBe(1.6);
-		expect(wfsPerAmp(inToMm(0.045))?.inPerMinPerAmp).toBe(1.0);
+		expect(wfsPerAmp(inToMm(0.023))?.inPerMinPerAmp).toBe(3.5); // common practice (machine manuals)
+		expect(wfsPerAmp(inToMm(0.024))?.inPerMinPerAmp).toBe(3.5); // common practice (machine manuals)
+		expect(wfsPerAmp(inToMm(0.03))?.inPerMinPerAmp).toBe(2.0); // common practice (machine manuals)
+		expect(wfsPerAmp(inToMm(0.035))?.inPerMinPerAmp).toBe(1.6); // common practice (machine manuals)
+		expect(wfsPerAmp(inToMm(0.045))?.inPerMinPerAmp).toBe(1.0); // common practice (machine manuals)
 		expect(wfsPerAmp(2)).toBeNull();
 	});
 	it('converts both ways', () => {

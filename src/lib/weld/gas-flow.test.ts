@@ -34,8 +34,8 @@ describe('common shielding gas mixes', () => {
 
 describe('flow ranges', () => {
 	it('GTAW argon 11-35 CFH, GMAW 25-35 CFH (common practice)', () => {
-		expect(gasFlowRange('GTAW', g('argon'))?.cfh).toEqual({ min: 11, max: 35 });
-		expect(gasFlowRange('GMAW', g('75/25'))?.cfh).toEqual({ min: 25, max: 35 });
+		expect(gasFlowRange('GTAW', g('argon'))?.cfh).toEqual({ min: 11, max: 35 }); // common practice, no source
+		expect(gasFlowRange('GMAW', g('75/25'))?.cfh).toEqual({ min: 25, max: 35 }); // common practice (textbook table)
 		expect(gasFlowRange('GTAW', g('helium'))?.source.kind).toBe('from memory');
 		expect(gasFlowRange('SMAW')).toBeNull();
 	});
@@ -57,9 +57,9 @@ describe('flow ranges', () => {
 			expected: { min: 11, max: 35, unit: 'CFH' },
 			field: 'gas.flow'
 		});
-		expect(flow('GTAW', 'argon', 8)?.status).toBe('caution');
-		expect(flow('GTAW', 'argon', 80)?.status).toBe('caution');
-		expect(flow('GMAW', '75/25', 15)?.message).toContain('porosity');
+		expect(flow('GTAW', 'argon', 8)?.status).toBe('caution'); // common practice
+		expect(flow('GTAW', 'argon', 80)?.status).toBe('caution'); // common practice
+		expect(flow('GMAW', '75/25', 15)?.message).toContain('porosity'); // common practice
 	});
 	it('metric users get L/min', () => {
 		const f = flow('GTAW', 'argon', 20, 'metric');
@@ -97,23 +97,23 @@ describe('gas for the process', () => {
 		})?.status;
 	};
 	it('GTAW needs inert gas', () => {
-		expect(v({ process: 'GTAW' }, 'argon')).toBe('ok');
-		expect(v({ process: 'GTAW' }, '75/25')).toBe('outside');
+		expect(v({ process: 'GTAW' }, 'argon')).toBe('ok'); // common practice
+		expect(v({ process: 'GTAW' }, '75/25')).toBe('outside'); // common practice
 	});
 	it('GMAW: aluminium inert only, spray needs argon-rich, stainless and CO2, steel and pure argon', () => {
-		expect(v({ process: 'GMAW' }, '75/25', 'aluminium')).toBe('outside');
-		expect(v({ process: 'GMAW' }, 'argon', 'aluminium')).toBe('ok');
-		expect(v({ process: 'GMAW', transfer: 'spray' }, 'co2', 'carbon-steel')).toBe('outside');
-		expect(v({ process: 'GMAW', transfer: 'spray' }, '90/10', 'carbon-steel')).toBe('ok');
-		expect(v({ process: 'GMAW' }, '75/25', 'stainless')).toBe('caution');
-		expect(v({ process: 'GMAW' }, 'tri-mix', 'stainless')).toBe('ok');
-		expect(v({ process: 'GMAW' }, 'argon', 'carbon-steel')).toBe('caution');
+		expect(v({ process: 'GMAW' }, '75/25', 'aluminium')).toBe('outside'); // common practice
+		expect(v({ process: 'GMAW' }, 'argon', 'aluminium')).toBe('ok'); // common practice
+		expect(v({ process: 'GMAW', transfer: 'spray' }, 'co2', 'carbon-steel')).toBe('outside'); // common practice
+		expect(v({ process: 'GMAW', transfer: 'spray' }, '90/10', 'carbon-steel')).toBe('ok'); // common practice
+		expect(v({ process: 'GMAW' }, '75/25', 'stainless')).toBe('caution'); // common practice
+		expect(v({ process: 'GMAW' }, 'tri-mix', 'stainless')).toBe('ok'); // common practice
+		expect(v({ process: 'GMAW' }, 'argon', 'carbon-steel')).toBe('caution'); // common practice
 	});
 	it('FCAW follows the C / M letter of the classification', () => {
-		expect(v({ process: 'FCAW' }, 'co2', 'carbon-steel', 'E71T-1C')).toBe('ok');
-		expect(v({ process: 'FCAW' }, '75/25', 'carbon-steel', 'E71T-1C')).toBe('caution');
-		expect(v({ process: 'FCAW' }, '75/25', 'carbon-steel', 'E71T-1M')).toBe('ok');
-		expect(v({ process: 'FCAW' }, 'co2', 'carbon-steel', 'E71T-11')).toBe('caution');
+		expect(v({ process: 'FCAW' }, 'co2', 'carbon-steel', 'E71T-1C')).toBe('ok'); // common practice
+		expect(v({ process: 'FCAW' }, '75/25', 'carbon-steel', 'E71T-1C')).toBe('caution'); // common practice
+		expect(v({ process: 'FCAW' }, '75/25', 'carbon-steel', 'E71T-1M')).toBe('ok'); // common practice
+		expect(v({ process: 'FCAW' }, 'co2', 'carbon-steel', 'E71T-11')).toBe('caution'); // common practice
 	});
 });
 

@@ -13,7 +13,7 @@ describe('AWS D1.1 requalification triggers (2015 Table 4.5)', () => {
 		expect(
 			requalificationTriggers(pqr, { process: 'GMAW', amps: { min: 180, max: 220 } })[0]?.status
 		).toBe('ok'); // exactly 10 %
-		const f = requalificationTriggers(pqr, { process: 'GMAW', amps: { min: 180, max: 225 } })[0];
+		const f = requalificationTriggers(pqr, { process: 'GMAW', amps: { min: 180, max: 225 } })[0]; // AWS D1.1:2015 Table 4.5
 		expect(f).toMatchObject({
 			check: 'requalification',
 			status: 'outside',
@@ -23,9 +23,9 @@ describe('AWS D1.1 requalification triggers (2015 Table 4.5)', () => {
 	});
 	it('GTAW amperage: over 25 %', () => {
 		const pqr = { process: 'GTAW' as const, amps: 100 };
-		expect(requalificationTriggers(pqr, { process: 'GTAW', amps: 125 })[0]?.status).toBe('ok');
-		expect(requalificationTriggers(pqr, { process: 'GTAW', amps: 126 })[0]?.status).toBe('outside');
-		expect(requalificationTriggers(pqr, { process: 'GTAW', amps: 74 })[0]?.status).toBe('outside');
+		expect(requalificationTriggers(pqr, { process: 'GTAW', amps: 125 })[0]?.status).toBe('ok'); // AWS D1.1:2015 Table 4.5
+		expect(requalificationTriggers(pqr, { process: 'GTAW', amps: 126 })[0]?.status).toBe('outside'); // AWS D1.1:2015 Table 4.5
+		expect(requalificationTriggers(pqr, { process: 'GTAW', amps: 74 })[0]?.status).toBe('outside'); // AWS D1.1:2015 Table 4.5
 	});
 	it('voltage over 7 % (GMAW, FCAW)', () => {
 		const pqr = { process: 'FCAW' as const, volts: 25 };
@@ -110,7 +110,7 @@ describe('within the procedure', () => {
 it('never throws (fast-check)', () => {
 	fc.assert(
 		fc.property(fc.anything(), fc.anything(), (a, b) => {
-			requalificationTriggers(a as never, b as never);
+			requalificationTriggers(a as never, b as never); // AWS D1.1:2015 Table 4.5
 		})
 	);
 });

@@ -233,7 +233,7 @@ describe('properties (fast-check)', () => {
 				const b = runChecks(structuredClone(s) as WeldSettings, { system: system as 'imperial' });
 				expect(b).toEqual(a);
 			}),
-			{ numRuns: 200 }
+			{ numRuns: 100 }
 		);
 	});
 	it('never throws, and every finding is well formed', () => {
@@ -244,7 +244,7 @@ describe('properties (fast-check)', () => {
 					expect(f.message).not.toMatch(/NaN|undefined|Infinity/);
 				}
 			}),
-			{ numRuns: 300 }
+			{ numRuns: 150 }
 		);
 		fc.assert(fc.property(fc.anything(), (x) => void runChecks(x as WeldSettings)));
 	});
