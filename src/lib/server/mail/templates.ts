@@ -119,3 +119,51 @@ export function revisionDecidedMail(p: {
 			SIGNATURE
 	};
 }
+
+/** A procedure revision waits for review: to the shop's inspectors. */
+export function reviewRequestedMail(p: {
+	to: string[];
+	number: string;
+	rev: number;
+	title: string;
+	submittedBy: string;
+	link: string;
+}): OutgoingMail {
+	return {
+		to: p.to,
+		subject: `Review requested: ${p.number} revision ${p.rev}`,
+		text:
+			`${p.submittedBy} sent ${p.number} revision ${p.rev} (${p.title}) for review.\n\n` +
+			`Read it with the check findings beside each value, then approve with your signature or ` +
+			`return it with comments:\n${p.link}` +
+			SIGNATURE
+	};
+}
+
+/** An inspector approved or returned a revision: to its author. */
+export function revisionDecidedMail(p: {
+	to: string[];
+	number: string;
+	rev: number;
+	title: string;
+	meaning: 'approved' | 'returned';
+	decidedBy: string;
+	comment: string | null;
+	link: string;
+}): OutgoingMail {
+	const approved = p.meaning === 'approved';
+	const comment = p.comment ? `\n\nComment from ${p.decidedBy}:\n${p.comment}` : '';
+	return {
+		to: p.to,
+		subject: approved
+			? `Approved: ${p.number} revision ${p.rev}`
+			: `Returned with comments: ${p.number} revision ${p.rev}`,
+		text:
+			(approved
+				? `${p.decidedBy} approved and signed ${p.number} revision ${p.rev} (${p.title}). It is now the revision in force.`
+				: `${p.decidedBy} returned ${p.number} revision ${p.rev} (${p.title}) to draft.`) +
+			comment +
+			`\n\nOpen the revision:\n${p.link}` +
+			SIGNATURE
+	};
+}

@@ -1,0 +1,14 @@
+import { ApiFailure } from '$lib/server/api/respond';
+import { ForbiddenError, NotFoundError, RefusedError } from '$lib/server/people/errors';
+
+/** A service's refusal as the API's JSON answer; anything else stays a logged 500. */
+export function apiFailureFor(e: unknown): unknown {
+	if (e instanceof ApiFailure) return e;
+	if (e instanceof NotFoundError) return new ApiFailure(404, { message: e.message });
+	if (e instanceof ForbiddenError) return new ApiFailure(403, { message: e.message });
+	if (e instanceof RefusedError)
+		return e.field
+			? new ApiFailure(400, { errors: { [e.field]: [e.message] } })
+			: new ApiFailure(409, { message: e.message });
+	return e;
+}
