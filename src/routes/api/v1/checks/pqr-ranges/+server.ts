@@ -1,0 +1,10 @@
+import { json } from '@sveltejs/kit';
+import { api, apiMember, readBody } from '$lib/server/api/respond';
+import { pqrRangesAnswer, pqrRangesBodySchema } from '$lib/schemas/checks';
+import type { RequestHandler } from './$types';
+
+export const POST: RequestHandler = api(async (event) => {
+	await apiMember(event);
+	const result = pqrRangesAnswer(await readBody(event, pqrRangesBodySchema));
+	return result.ok ? json(result.answer) : json({ errors: result.errors }, { status: 400 });
+});
