@@ -1,0 +1,186 @@
+// The audit trail of procedures and PQRs: per object, and shop-wide for admins with filters and a
+// CSV export. Events are append-only; before and after are shown as the paths that changed.
+import { Op, type WhereOptions } from 'sequelize';
+import type { SessionUser } from '../auth/session-user';
+import { AuditEvent, ProcedureRevision } from '../models';
+
+export interface TrailEntry {
+	id: number;
+	at: string;
+	actor: string;
+	action: string;
+	objectType: string;
+	objectId: string | null;
+	changes: { path: string; before: string; after: string }[];
+	ip: string | null;
+}
+
+const parse = (s: string | null): unknown => {
+	if (s === null) return undefined;
+	try {
+		return JSON.parse(s);
+	} catch {
+		return s;
+	}
+};
+
+/** Leaf values of a JSON value by dotted path; arrays of scalars stay one leaf. */
+export function flatten(
+	v: unknown,
+	prefix = '',
+	out: Record<string, string> = {}
+): Record<string, string> {
+	if (v === undefined) return out;
+	if (
+		v !== null &&
+		typeof v === 'object' &&
+		!(Array.isArray(v) && v.every((x) => typeof x !== 'object'))
+	) {
+		for (const [k, x] of Object.entries(v as Record<string, unknown>))
+			flatten(x, prefix ? `${prefix}.${k}` : k, out);
+		return out;
+	}
+	out[prefix || 'value'] = Array.isArray(v) ? v.join(', ') : v === null ? '' : String(v);
+	return out;
+}
+
+/** The paths whose values differ between before and after (all of after for a creation). */
+export function changesOf(before: unknown, after: unknown) {
+	const a = flatten(before);
+	const b = flatten(after);
+	return [...new Set([...Object.keys(a), ...Object.keys(b)])]
+		.filter((k) => (a[k] ?? '') !== (b[k] ?? ''))
+		.map((path) => ({ path, before: a[path] ?? '', after: b[path] ?? '' }));
+}
+
+const entry = (e: AuditEvent): TrailEntry => ({
+	id: e.id,
+	at: e.at.toISOString(),
+	actor: e.actorName,
+	action: e.action,
+	objectType: e.objectType,
+	objectId: e.objectId,
+	changes: changesOf(parse(e.before), parse(e.after)),
+	ip: e.ip
+});
+
+/** A procedure's own events and those of all its revisions, oldest first. */
+export async function procedureTrail(
+	actor: SessionUser,
+	procedureId: number
+): Promise<TrailEntry[]> {
+	const revs = await ProcedureRevision.findAll({
+		where: { procedureId, shopId: actor.shopId },
+		attributes: ['id']
+	});
+	const events = await AuditEvent.findAll({
+		where: {
+			shopId: actor.shopId,
+			[Op.or]: [
+				{ objectType: 'procedure', objectId: String(procedureId) },
+				{ objectType: 'procedure_revision', objectId: { [Op.in]: revs.map((r) => String(r.id)) } }
+			]
+		},
+		order: [['id', 'ASC']],
+		limit: 1000
+	});
+	return events.map(entry);
+}
+
+export async function objectTrail(actor: SessionUser, objectType: string, objectId: number) {
+	const events = await AuditEvent.findAll({
+		where: { shopId: actor.shopId, objectType, objectId: String(objectId) },
+		order: [['id', 'ASC']],
+		limit: 1000
+	});
+	return events.map(entry);
+}
+
+export interface TrailFilters {
+	type?: string;
+	action?: string;
+	actor?: string;
+	object?: string;
+	from?: string;
+	to?: string;
+	page: number;
+}
+
+export const TRAIL_PAGE = 100;
+
+function whereOf(actor: SessionUser, f: TrailFilters): WhereOptions<AuditEvent> {
+	const and: WhereOptions<AuditEvent>[] = [{ shopId: actor.shopId }];
+	if (f.type) and.push({ objectType: f.type });
+	if (f.action) and.push({ action: { [Op.like]: `%${f.action.replace(/%/g, '')}%` } });
+	if (f.actor) and.push({ actorName: { [Op.like]: `%${f.actor.replace(/%/g, '')}%` } });
+	if (f.object) and.push({ objectId: f.object });
+	if (f.from) and.push({ at: { [Op.gte]: new Date(`${f.from}T00:00:00Z`) } });
+	if (f.to)
+		and.push({ at: { [Op.lt]: new Date(new Date(`${f.to}T00:00:00Z`).getTime() + 86_400_000) } });
+	return { [Op.and]: and };
+}
+
+export async function shopTrail(actor: SessionUser, f: TrailFilters) {
+	const { rows, count } = await AuditEvent.findAndCountAll({
+		where: whereOf(actor, f),
+		order: [['id', 'DESC']],
+		limit: TRAIL_PAGE,
+		offset: (f.page - 1) * TRAIL_PAGE
+	});
+	const types = await AuditEvent.findAll({
+		where: { shopId: actor.shopId },
+		attributes: ['objectType'],
+		group: ['objectType'],
+		order: [['objectType', 'ASC']]
+	});
+	return {
+		rows: rows.map(entry),
+		total: count,
+		pages: Math.max(1, Math.ceil(count / TRAIL_PAGE)),
+		types: types.map((t) => t.objectType)
+	};
+}
+
+/** A spreadsheet cell: quoted, and never read as a formula. */
+export function csvCell(v: string | null | undefined): string {
+	let s = v ?? '';
+	if (/^[=+\-@\t\r]/.test(s)) s = `'${s}`;
+	return /[",\n\r]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
+}
+
+export const CSV_MAX_ROWS = 50_000;
+
+export async function shopTrailCsv(actor: SessionUser, f: TrailFilters): Promise<string> {
+	const rows = await AuditEvent.findAll({
+		where: whereOf(actor, f),
+		order: [['id', 'ASC']],
+		limit: CSV_MAX_ROWS
+	});
+	const head = [
+		'id',
+		'at_utc',
+		'actor',
+		'action',
+		'object_type',
+		'object_id',
+		'before',
+		'after',
+		'ip'
+	];
+	const lines = rows.map((e) =>
+		[
+			String(e.id),
+			e.at.toISOString(),
+			e.actorName,
+			e.action,
+			e.objectType,
+			e.objectId,
+			e.before,
+			e.after,
+			e.ip
+		]
+			.map(csvCell)
+			.join(',')
+	);
+	return [head.join(','), ...lines].join('\r\n') + '\r\n';
+}
