@@ -61,6 +61,7 @@ test('a wrong password and an unknown e-mail show the same generic message', asy
 });
 
 test('20 wrong passwords in a row are throttled', async ({ page }) => {
+	test.setTimeout(120_000);
 	// Priya is used by no other test, so throttling her account does not disturb the suite.
 	const target = person('priya@larkspur.example');
 	let throttled = false;

@@ -10,11 +10,22 @@ const BY_ROLE: Record<Role, NavItem[]> = {
 	admin: [
 		{ href: '/admin', label: 'Overview' },
 		{ href: '/admin/people', label: 'People' },
-		{ href: '/admin/shop', label: 'Shop' }
+		{ href: '/admin/shop', label: 'Shop' },
+		{ href: '/admin/tokens', label: 'API tokens' },
+		{ href: '/welders', label: 'Welders' }
 	],
-	engineer: [{ href: '/records', label: 'Bench records' }],
-	inspector: [{ href: '/reviews', label: 'Review desk' }],
-	welder: [{ href: '/booth', label: 'Booth' }]
+	engineer: [
+		{ href: '/records', label: 'Bench records' },
+		{ href: '/welders', label: 'Welders' }
+	],
+	inspector: [
+		{ href: '/reviews', label: 'Review desk' },
+		{ href: '/welders', label: 'Welders' }
+	],
+	welder: [
+		{ href: '/booth', label: 'Booth' },
+		{ href: '/welders/me', label: 'My qualifications' }
+	]
 };
 
 const FOR_ALL: NavItem[] = [{ href: '/help/checks', label: 'How checks work' }];
