@@ -1,10 +1,32 @@
-// The live checks' request (the v1 checks contract: quantities as { value, unit } in SI) and the
-// map from a finding's `field` back to the form field it sits beside.
+// The live checks' request (the v1 checks contract: quantities as { value, unit }, sent in the
+// reader's units because the API answers in the units it is asked in) and the map from a
+// finding's `field` back to the form field it sits beside.
+import {
+	cToTemperature,
+	lPerMinToFlow,
+	mmPerSToSpeed,
+	mmToLength,
+	type UnitSystem
+} from '$lib/weld';
 import type { RecordValues } from './values';
 
 type Quantity = { value: number; unit: string };
 const q = (value: number | null, unit: string): Quantity | undefined =>
 	value === null ? undefined : { value, unit };
+
+function inUnits(system: UnitSystem) {
+	const imp = system === 'imperial';
+	const lengthUnit = imp ? 'in' : 'mm';
+	const speedUnit = imp ? 'in/min' : 'mm/min';
+	const flowUnit = imp ? 'CFH' : 'L/min';
+	const tempUnit = imp ? 'degF' : 'degC';
+	return {
+		length: (mm: number | null) => q(mm === null ? null : mmToLength(mm, lengthUnit), lengthUnit),
+		speed: (v: number | null) => q(v === null ? null : mmPerSToSpeed(v, speedUnit), speedUnit),
+		flow: (v: number | null) => q(v === null ? null : lPerMinToFlow(v, flowUnit), flowUnit),
+		temperature: (c: number | null) => q(c === null ? null : cToTemperature(c, tempUnit), tempUnit)
+	};
+}
 
 /** Drops undefined members so the JSON is small and stable (it is also the de-duplication key). */
 function compact<T extends Record<string, unknown>>(o: T): Partial<T> | undefined {
@@ -14,7 +36,8 @@ function compact<T extends Record<string, unknown>>(o: T): Partial<T> | undefine
 	return Object.keys(out).length ? (out as Partial<T>) : undefined;
 }
 
-export function checksBody(v: RecordValues): Record<string, unknown> {
+export function checksBody(v: RecordValues, system: UnitSystem): Record<string, unknown> {
+	const u = inUnits(system);
 	return {
 		process: v.process,
 		...compact({
@@ -22,19 +45,21 @@ export function checksBody(v: RecordValues): Record<string, unknown> {
 			transfer: v.transfer,
 			amps: v.amps,
 			volts: v.volts,
-			travelSpeed: q(v.travelSpeedMmPerS, 'mm/s'),
-			wireFeed: q(v.wireFeedMmPerS, 'mm/s'),
-			thickness: q(v.thicknessMm, 'mm'),
+			travelSpeed: u.speed(v.travelSpeedMmPerS),
+			wireFeed: u.speed(v.wireFeedMmPerS),
+			thickness: u.length(v.thicknessMm),
 			baseMetal: v.baseMetalSpec ? { spec: v.baseMetalSpec } : undefined,
 			filler: compact({
 				classification: v.fillerClass,
-				diameter: q(v.fillerDiameterMm, 'mm')
+				diameter: u.length(v.fillerDiameterMm)
 			}),
 			tungsten: compact({
 				classification: v.tungstenClass,
-				diameter: q(v.tungstenDiameterMm, 'mm')
+				diameter: u.length(v.tungstenDiameterMm)
 			}),
-			gas: compact({ name: v.gasName, flow: q(v.gasFlowLPerMin, 'L/min') })
+			gas: compact({ name: v.gasName, flow: u.flow(v.gasFlowLPerMin) }),
+			position: v.position,
+			preheat: u.temperature(v.preheatC)
 		})
 	};
 }
