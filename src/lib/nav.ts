@@ -12,14 +12,19 @@ const BY_ROLE: Record<Role, NavItem[]> = {
 		{ href: '/admin/people', label: 'People' },
 		{ href: '/admin/shop', label: 'Shop' },
 		{ href: '/admin/tokens', label: 'API tokens' },
+		{ href: '/admin/audit', label: 'Audit trail' },
+		{ href: '/procedures', label: 'Procedures' },
 		{ href: '/welders', label: 'Welders' }
 	],
 	engineer: [
 		{ href: '/records', label: 'Bench records' },
+		{ href: '/procedures', label: 'Procedures' },
+		{ href: '/pqrs', label: 'PQRs' },
 		{ href: '/welders', label: 'Welders' }
 	],
 	inspector: [
 		{ href: '/reviews', label: 'Review desk' },
+		{ href: '/procedures', label: 'Procedures' },
 		{ href: '/welders', label: 'Welders' }
 	],
 	welder: [

@@ -1,15 +1,24 @@
 // Demo welders of the invented shop, with qualifications in every state relative to the day the
 // seed runs: current, lapsing within a week (Priya Venn's GMAW, for the reminder job), and
 // lapsed. Idempotent: a welder whose stamp exists is left as it is.
+import type { InferCreationAttributes } from 'sequelize';
 import { addCalendarMonths, formatDate, parseDate } from '$lib/weld/continuity';
 import { write } from '../db/write-queue';
 import { ContinuityEntry, Qualification, User, Welder, type Shop } from '../models';
 import { addDays, localDay } from '../welders/dates';
 
 type Q = Omit<
-	Qualification['_creationAttributes'],
-	'shopId' | 'welderId' | 'createdById' | 'testDate'
-> & { testDate: string };
+	InferCreationAttributes<Qualification>,
+	| 'id'
+	| 'shopId'
+	| 'welderId'
+	| 'createdById'
+	| 'recordKey'
+	| 'recordName'
+	| 'withdrawnAt'
+	| 'createdAt'
+	| 'updatedAt'
+>;
 
 interface DemoWelder {
 	name: string;

@@ -1,0 +1,32 @@
+import { fail, redirect } from '@sveltejs/kit';
+import { superValidate } from 'sveltekit-superforms';
+import { zod4 } from 'sveltekit-superforms/adapters';
+import { requireRole } from '$lib/server/auth/guards';
+import { refuseForm } from '$lib/server/people/form-errors';
+import { MANAGE_ROLES } from '$lib/server/welders/access';
+import { createWelder, linkableAccounts } from '$lib/server/welders/welders';
+import { welderSchema } from '$lib/schemas/welder';
+import type { Actions, PageServerLoad } from './$types';
+
+export const load: PageServerLoad = async (event) => {
+	const user = requireRole(event, ...MANAGE_ROLES);
+	return {
+		form: await superValidate(zod4(welderSchema)),
+		accounts: await linkableAccounts(user.shopId)
+	};
+};
+
+export const actions: Actions = {
+	default: async (event) => {
+		const user = requireRole(event, ...MANAGE_ROLES);
+		const form = await superValidate(event.request, zod4(welderSchema));
+		if (!form.valid) return fail(400, { form });
+		let id: number;
+		try {
+			({ id } = await createWelder(user, form.data, event));
+		} catch (e) {
+			return refuseForm(form, e);
+		}
+		redirect(303, `/welders/${id}`);
+	}
+};
