@@ -1,0 +1,32 @@
+// npm run db:restore -- DIR [--force] — verifies a backup folder (manifest, SHA-256s, integrity,
+// table digests) and puts it in place of DATABASE_FILE and UPLOADS_DIR. What was there is moved
+// aside, never deleted. Refuses while another process has the database open, unless --force.
+import { resolve } from 'node:path';
+import { config } from '../src/lib/server/config';
+import { restoreBackup } from './lib/backup';
+
+const dir = process.argv.slice(2).find((a) => !a.startsWith('--'));
+if (!dir) {
+	console.error('Usage: npm run db:restore -- <backup folder> [--force]');
+	process.exit(1);
+}
+try {
+	const { manifest, movedAside } = await restoreBackup({
+		dir: resolve(dir),
+		databaseFile: config.databaseFile,
+		uploadsDir: config.uploadsDir,
+		force: process.argv.includes('--force')
+	});
+	const rows = Object.values(manifest.database.tables).reduce((n, t) => n + t.rows, 0);
+	console.log(`Restored the backup of ${manifest.createdAt} into ${config.databaseFile}`);
+	console.log(
+		`  ${rows} rows in ${Object.keys(manifest.database.tables).length} tables, digests match`
+	);
+	console.log(
+		`  ${manifest.uploads.files.length} uploads into ${config.uploadsDir}, SHA-256s match`
+	);
+	for (const p of movedAside) console.log(`  kept the previous ${p}`);
+} catch (e) {
+	console.error(e instanceof Error ? e.message : e);
+	process.exit(1);
+}
