@@ -11,7 +11,15 @@ import {
 } from '$reference/wire-and-rod';
 import type { Band, MetalFamily, Process, Source, Transfer } from '$reference/types';
 import type { CheckContext } from './context';
-import { bandStatus, expected, isNum, rangeText, sourceOf, type Finding } from './findings';
+import {
+	bandStatus,
+	expected,
+	isNum,
+	rangeText,
+	sourceOf,
+	type Finding,
+	guardCheck
+} from './findings';
 import {
 	formatLength,
 	formatSpeed,
@@ -147,12 +155,13 @@ export function ampsMessage(
 	basis: string,
 	status: Finding['status']
 ): string {
+	if (!isNum(amps) || !band || !isNum(band.min) || !isNum(band.max)) return '';
 	const where =
 		status === 'ok' ? WORDS.ok : amps < band.min ? WORDS.low[status] : WORDS.high[status];
 	return `${Math.round(amps * 10) / 10} A ${where} the usual band for ${basis} (${rangeText(`${band.min}`, `${band.max}`)} A).`;
 }
 
-export function checkAmpsVsThickness(ctx: CheckContext): Finding | null {
+function checkAmpsVsThicknessUnguarded(ctx: CheckContext): Finding | null {
 	const { amps, thicknessMm, process } = ctx.s;
 	if (!isNum(amps) || !isNum(thicknessMm)) return null;
 	const b = thicknessAmpBand(process, thicknessMm, ctx.family ?? 'carbon-steel', ctx.system);
@@ -169,7 +178,7 @@ export function checkAmpsVsThickness(ctx: CheckContext): Finding | null {
 	};
 }
 
-export function checkAmpsVsFiller(ctx: CheckContext): Finding | null {
+function checkAmpsVsFillerUnguarded(ctx: CheckContext): Finding | null {
 	const { amps, process, transfer } = ctx.s;
 	const d = ctx.s.filler?.diameterMm;
 	if (!isNum(amps) || !isNum(d)) return null;
@@ -189,7 +198,7 @@ export function checkAmpsVsFiller(ctx: CheckContext): Finding | null {
 	};
 }
 
-export function checkWfsVsAmps(ctx: CheckContext): Finding | null {
+function checkWfsVsAmpsUnguarded(ctx: CheckContext): Finding | null {
 	const { amps, wireFeedMmPerS, process } = ctx.s;
 	const d = ctx.s.filler?.diameterMm;
 	if (process !== 'GMAW' || !isNum(amps) || !isNum(wireFeedMmPerS) || !isNum(d)) return null;
@@ -217,3 +226,7 @@ export function checkWfsVsAmps(ctx: CheckContext): Finding | null {
 		field: 'wireFeed'
 	};
 }
+
+export const checkAmpsVsThickness = guardCheck(checkAmpsVsThicknessUnguarded, null);
+export const checkAmpsVsFiller = guardCheck(checkAmpsVsFillerUnguarded, null);
+export const checkWfsVsAmps = guardCheck(checkWfsVsAmpsUnguarded, null);

@@ -4,7 +4,7 @@ import { D1_1_CATEGORY_B_SPECS } from '$reference/aws-d1-1-preheat';
 import { ASME_IX_QW_422 } from '$reference/sources';
 import type { MetalFamily } from '$reference/types';
 import type { CheckContext } from './context';
-import { sourceOf, type Finding } from './findings';
+import { sourceOf, type Finding, guardCheck } from './findings';
 
 export interface BaseMetal {
 	/** Null when only a family was given. */
@@ -100,7 +100,7 @@ export function parseBaseMetal(spec: unknown): BaseMetalResult {
 	};
 }
 
-export function checkBaseMetal(ctx: CheckContext): Finding | null {
+function checkBaseMetalUnguarded(ctx: CheckContext): Finding | null {
 	const spec = ctx.s.baseMetal?.spec;
 	if (spec === undefined) return null;
 	const r = ctx.metal?.row ? ({ ok: true, metal: ctx.metal } as const) : parseBaseMetal(spec);
@@ -132,3 +132,5 @@ export function checkBaseMetal(ctx: CheckContext): Finding | null {
 		field
 	};
 }
+
+export const checkBaseMetal = guardCheck(checkBaseMetalUnguarded, null);

@@ -46,20 +46,36 @@ export function parseDate(input: unknown): CalendarDate | null {
 }
 
 const pad = (n: number, w = 2): string => String(n).padStart(w, '0');
-export const formatDate = (c: CalendarDate): string => `${pad(c.y, 4)}-${pad(c.m)}-${pad(c.d)}`;
+const valid = (c: CalendarDate | undefined): c is CalendarDate =>
+	typeof c === 'object' &&
+	c !== null &&
+	[c.y, c.m, c.d].every((n) => Number.isInteger(n)) &&
+	c.y >= 0 &&
+	c.y <= 9999 &&
+	c.m >= 1 &&
+	c.m <= 12 &&
+	c.d >= 1 &&
+	c.d <= 31;
+
+/** 'YYYY-MM-DD'; an empty string for something that is not a calendar date. */
+export const formatDate = (c: CalendarDate): string =>
+	valid(c) ? `${pad(c.y, 4)}-${pad(c.m)}-${pad(c.d)}` : '';
 const dayNumber = (c: CalendarDate): number => Date.UTC(c.y, c.m - 1, c.d) / DAY_MS;
 
 /** Adds calendar months, clamping to the end of a shorter month. */
 export function addCalendarMonths(date: CalendarDate, months: number): CalendarDate {
+	// Not a date in: not a date out (formatDate prints it as '').
+	if (!valid(date) || !Number.isFinite(months) || Math.abs(months) > 120_000)
+		return { y: NaN, m: NaN, d: NaN };
 	const total = date.y * 12 + (date.m - 1) + Math.trunc(months);
 	const y = Math.floor(total / 12);
-	const m = (total % 12) + 1;
+	const m = (((total % 12) + 12) % 12) + 1;
 	return { y, m, d: Math.min(date.d, daysInMonth(y, m)) };
 }
 
 /** Whole days from `a` to `b` (negative when b is earlier). */
 export const daysBetween = (a: CalendarDate, b: CalendarDate): number =>
-	Math.round(dayNumber(b) - dayNumber(a));
+	valid(a) && valid(b) ? Math.round(dayNumber(b) - dayNumber(a)) : NaN;
 
 export type ContinuityResult =
 	| {

@@ -14,7 +14,7 @@ import {
 } from '$reference/sources';
 import type { CurrentType, MetalFamily, Source } from '$reference/types';
 import type { CheckContext } from './context';
-import { sourceOf, type Finding } from './findings';
+import { sourceOf, type Finding, guardCheck } from './findings';
 
 export type FillerForm = 'solid wire or rod' | 'flux-cored wire' | 'covered electrode';
 
@@ -240,6 +240,7 @@ export function parseFiller(text: unknown): FillerResult {
 
 /** Whether a filler suits a base metal family: 'ok', 'caution' (unusual but used) or 'outside'. */
 export function fillerSuits(filler: Filler, base: MetalFamily): 'ok' | 'caution' | 'outside' {
+	if (!filler || !Array.isArray(filler.suits)) return 'outside';
 	if (filler.suits.includes(base)) {
 		// ER309L on carbon steel is for joining it to stainless; alone it is an odd choice.
 		if (filler.family !== base && filler.family === 'stainless') return 'caution';
@@ -257,7 +258,7 @@ const FAMILY_WORDS: Record<MetalFamily, string> = {
 };
 
 /** Reports what the classification encodes, or that it could not be read. */
-export function checkFillerClassification(ctx: CheckContext): Finding | null {
+function checkFillerClassificationUnguarded(ctx: CheckContext): Finding | null {
 	const text = ctx.s.filler?.classification;
 	if (text === undefined) return null;
 	const r = ctx.filler ? ({ ok: true, filler: ctx.filler } as const) : parseFiller(text);
@@ -296,7 +297,7 @@ export function checkFillerClassification(ctx: CheckContext): Finding | null {
 	};
 }
 
-export function checkFillerVsBaseMetal(ctx: CheckContext): Finding | null {
+function checkFillerVsBaseMetalUnguarded(ctx: CheckContext): Finding | null {
 	const f = ctx.filler;
 	const base = ctx.family;
 	if (!f || !base) return null;
@@ -320,3 +321,6 @@ export function checkFillerVsBaseMetal(ctx: CheckContext): Finding | null {
 		field: 'filler.classification'
 	};
 }
+
+export const checkFillerClassification = guardCheck(checkFillerClassificationUnguarded, null);
+export const checkFillerVsBaseMetal = guardCheck(checkFillerVsBaseMetalUnguarded, null);

@@ -17,7 +17,8 @@ import {
 	round,
 	sourceOf,
 	type Finding,
-	type FindingStatus
+	type FindingStatus,
+	guardCheck
 } from './findings';
 import { flowToLPerMin, formatFlow, lPerMinToFlow } from './units';
 
@@ -53,7 +54,7 @@ export function gasFlowRange(process: Process, gas?: GasMix): FlowRow | null {
 	return GAS_FLOW.find((r) => r.use === use) ?? null;
 }
 
-export function checkGasFlow(ctx: CheckContext): Finding | null {
+function checkGasFlowUnguarded(ctx: CheckContext): Finding | null {
 	const flow = ctx.s.gas?.flowLPerMin;
 	if (!isNum(flow) || ctx.filler?.gas === 'none') return null;
 	const row = gasFlowRange(ctx.s.process, ctx.gas);
@@ -155,7 +156,7 @@ function gasVerdict(ctx: CheckContext, g: GasMix): Verdict {
 	return { status: 'caution', message: 'SMAW needs no shielding gas.' };
 }
 
-export function checkGasForProcess(ctx: CheckContext): Finding | null {
+function checkGasForProcessUnguarded(ctx: CheckContext): Finding | null {
 	const g = ctx.gas;
 	if (!g) return null;
 	const v = gasVerdict(ctx, g);
@@ -169,3 +170,6 @@ export function checkGasForProcess(ctx: CheckContext): Finding | null {
 		field: 'gas.name'
 	};
 }
+
+export const checkGasFlow = guardCheck(checkGasFlowUnguarded, null);
+export const checkGasForProcess = guardCheck(checkGasForProcessUnguarded, null);

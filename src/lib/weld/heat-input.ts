@@ -3,7 +3,7 @@ import { K_FACTORS, PROCESS_ISO4063 } from '$reference/heat-input-k';
 import { ASME_IX_QW_409_1, ISO_TR_17671_1 } from '$reference/sources';
 import type { Process, Source } from '$reference/types';
 import type { CheckContext } from './context';
-import { isNum, round, sourceOf, type Finding } from './findings';
+import { isNum, round, sourceOf, type Finding, guardCheck } from './findings';
 import { MM_PER_IN } from './units';
 
 const positive = (n: unknown): n is number => isNum(n) && n > 0;
@@ -72,14 +72,14 @@ export function maxArcEnergyJPerMm(ranges: {
 	travelSpeedMmPerS: { min?: number };
 }): number | null {
 	const e = arcEnergyKJPerMm(
-		ranges.volts.max ?? NaN,
-		ranges.amps.max ?? NaN,
-		ranges.travelSpeedMmPerS.min ?? NaN
+		ranges?.volts?.max ?? NaN,
+		ranges?.amps?.max ?? NaN,
+		ranges?.travelSpeedMmPerS?.min ?? NaN
 	);
 	return e === null ? null : e * 1000;
 }
 
-export function checkHeatInput(ctx: CheckContext): Finding | null {
+function checkHeatInputUnguarded(ctx: CheckContext): Finding | null {
 	const { process, volts, amps, travelSpeedMmPerS, procedure } = ctx.s;
 	const max = procedure?.heatInputMax;
 	if (!max || !positive(max.jPerMm) || !isNum(volts) || !isNum(amps) || !isNum(travelSpeedMmPerS))
@@ -111,3 +111,5 @@ export function checkHeatInput(ctx: CheckContext): Finding | null {
 		field: 'travelSpeed'
 	};
 }
+
+export const checkHeatInput = guardCheck(checkHeatInputUnguarded, null);

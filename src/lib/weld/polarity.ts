@@ -2,7 +2,7 @@
 import { AWS_A5_CLASSIFICATION, POLARITY_PRACTICE } from '$reference/sources';
 import type { Source } from '$reference/types';
 import type { CheckContext } from './context';
-import { sourceOf, type Finding, type FindingStatus } from './findings';
+import { sourceOf, type Finding, type FindingStatus, guardCheck } from './findings';
 
 interface Verdict {
 	status: FindingStatus;
@@ -69,7 +69,7 @@ function verdict(ctx: CheckContext): Verdict | null {
 	}
 }
 
-export function checkCurrentType(ctx: CheckContext): Finding | null {
+function checkCurrentTypeUnguarded(ctx: CheckContext): Finding | null {
 	const v = verdict(ctx);
 	if (!v || !ctx.s.currentType) return null;
 	return {
@@ -82,3 +82,5 @@ export function checkCurrentType(ctx: CheckContext): Finding | null {
 		field: 'currentType'
 	};
 }
+
+export const checkCurrentType = guardCheck(checkCurrentTypeUnguarded, null);

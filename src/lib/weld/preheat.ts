@@ -6,7 +6,7 @@ import {
 } from '$reference/aws-d1-1-preheat';
 import { AWS_D1_1_TABLE_3_3, CE_GUIDANCE, IIW_CE } from '$reference/sources';
 import type { CheckContext } from './context';
-import { isNum, round, sourceOf, type Finding, type FindingStatus } from './findings';
+import { isNum, round, sourceOf, type Finding, type FindingStatus, guardCheck } from './findings';
 import type { Chemistry } from './settings';
 import { cToF, formatLength, formatTemperature, MM_PER_IN, type UnitSystem } from './units';
 
@@ -29,7 +29,7 @@ export function carbonEquivalentIIW(chem: Chemistry | undefined): number | null 
 /** Shop guidance on CE (common practice): up to 0.40 usually none, to 0.60 likely, above hard. */
 export const CE_BANDS = { easy: 0.4, hard: 0.6 } as const;
 
-export function checkCarbonEquivalent(ctx: CheckContext): Finding | null {
+function checkCarbonEquivalentUnguarded(ctx: CheckContext): Finding | null {
 	const ce = carbonEquivalentIIW(ctx.s.chemistry);
 	if (ce === null) return null;
 	const v = round(ce, 2);
@@ -73,7 +73,7 @@ export function d11MinimumPreheat(
 	return D1_1_CATEGORY_B.find((r) => inBand(t, r.in)) ?? null;
 }
 
-export function checkPreheat(ctx: CheckContext): Finding | null {
+function checkPreheatUnguarded(ctx: CheckContext): Finding | null {
 	const { thicknessMm, preheatC, process } = ctx.s;
 	if (!isNum(thicknessMm) || !isNum(preheatC)) return null;
 	if (ctx.family !== 'carbon-steel') return null;
@@ -115,3 +115,6 @@ export function checkPreheat(ctx: CheckContext): Finding | null {
 		field: 'preheat'
 	};
 }
+
+export const checkCarbonEquivalent = guardCheck(checkCarbonEquivalentUnguarded, null);
+export const checkPreheat = guardCheck(checkPreheatUnguarded, null);

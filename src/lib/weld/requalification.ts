@@ -4,7 +4,7 @@ import { D1_1_REQUALIFICATION, D1_1_REQUALIFICATION_SOURCE } from '$reference/qu
 import type { Band, CurrentType, Process, Source, Transfer } from '$reference/types';
 import type { CheckId } from './check-catalogue';
 import type { CheckContext } from './context';
-import { expected, isNum, rangeText, round, sourceOf, type Finding } from './findings';
+import { expected, isNum, rangeText, round, sourceOf, type Finding, guardCheck } from './findings';
 import { formatSpeed, mmPerSToSpeed } from './units';
 
 export const PROCEDURE_SOURCE: Source = {
@@ -32,7 +32,7 @@ export function checkAgainstRange(
 	range: Partial<Band>,
 	o: RangeCheck
 ): Finding | null {
-	if (!isNum(value)) return null;
+	if (!isNum(value) || !range || !o || typeof o.field !== 'string') return null;
 	const min = isNum(range.min) ? range.min : undefined;
 	const max = isNum(range.max) ? range.max : undefined;
 	if (min === undefined && max === undefined) return null;
@@ -55,7 +55,7 @@ export function checkAgainstRange(
 }
 
 /** Settings record against the procedure's ranges, in the user's units. */
-export function checkWithinProcedure(ctx: CheckContext): Finding[] {
+function checkWithinProcedureUnguarded(ctx: CheckContext): Finding[] {
 	const p = ctx.s.procedure;
 	if (!p) return [];
 	const out: (Finding | null)[] = [];
@@ -174,3 +174,5 @@ export function requalificationTriggers(pqr: ProcessValues, wps: ProcessValues):
 	];
 	return found.filter((f): f is Finding => f !== null);
 }
+
+export const checkWithinProcedure = guardCheck(checkWithinProcedureUnguarded, [] as Finding[]);

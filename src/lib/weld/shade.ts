@@ -3,7 +3,7 @@ import { SHADE_ADVICE, SHADE_TABLE, type ShadeProcess, type ShadeRow } from '$re
 import { OSHA_1910_133 } from '$reference/sources';
 import type { Process } from '$reference/types';
 import type { CheckContext } from './context';
-import { isNum, sourceOf, type Finding } from './findings';
+import { isNum, sourceOf, type Finding, guardCheck } from './findings';
 
 export { SHADE_ADVICE };
 
@@ -35,7 +35,7 @@ export function lensShade(process: Process, amps: number): Shade | null {
 	return { minimum: row.minimum, suggested: row.suggested, row, aboveTable: !hit };
 }
 
-export function checkLensShade(ctx: CheckContext): Finding | null {
+function checkLensShadeUnguarded(ctx: CheckContext): Finding | null {
 	const { process, amps, lensShade: used } = ctx.s;
 	if (!isNum(amps) || !isNum(used)) return null;
 	const shade = lensShade(process, amps);
@@ -64,3 +64,5 @@ export function checkLensShade(ctx: CheckContext): Finding | null {
 		field: 'lensShade'
 	};
 }
+
+export const checkLensShade = guardCheck(checkLensShadeUnguarded, null);

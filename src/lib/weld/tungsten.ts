@@ -8,7 +8,7 @@ import {
 import { AWS_A5_12 } from '$reference/sources';
 import type { Band, CurrentType, Source } from '$reference/types';
 import type { CheckContext } from './context';
-import { isNum, sourceOf, type Finding } from './findings';
+import { isNum, sourceOf, type Finding, guardCheck } from './findings';
 import { formatLength } from './units';
 
 export type TungstenResult =
@@ -104,7 +104,7 @@ const ampsText = (b: Band): string => `${b.min}–${b.max} A`;
  * every chart: outside (the tip melts). Below every chart: caution (the arc wanders; a smaller
  * tungsten suits), since running cold does no harm to the electrode.
  */
-export function checkAmpsVsTungsten(ctx: CheckContext): Finding | null {
+function checkAmpsVsTungstenUnguarded(ctx: CheckContext): Finding | null {
 	const { amps, currentType } = ctx.s;
 	const t = ctx.tungsten;
 	const d = ctx.s.tungsten?.diameterMm;
@@ -152,7 +152,7 @@ export function checkAmpsVsTungsten(ctx: CheckContext): Finding | null {
 	};
 }
 
-export function checkTungstenVsCurrent(ctx: CheckContext): Finding | null {
+function checkTungstenVsCurrentUnguarded(ctx: CheckContext): Finding | null {
 	const t = ctx.tungsten;
 	const current = ctx.s.currentType;
 	if (!t || !current || ctx.s.process !== 'GTAW') return null;
@@ -178,3 +178,6 @@ export function checkTungstenVsCurrent(ctx: CheckContext): Finding | null {
 		};
 	return { ...base, status: 'ok', message: `${t.classification} suits ${current}.` };
 }
+
+export const checkAmpsVsTungsten = guardCheck(checkAmpsVsTungstenUnguarded, null);
+export const checkTungstenVsCurrent = guardCheck(checkTungstenVsCurrentUnguarded, null);
