@@ -8,7 +8,7 @@ export interface ProcedureDescription {
 	process: string;
 	/** Positions as a WPS lists them: test-style ('2F', '3G', '6G') or plain ('F', 'H', 'V', 'O'). */
 	positions: readonly string[];
-	/** Groove or fillet; groove when not given (the stricter case). */
+	/** For plain positions (F, H, V, O): groove or fillet; groove when not given (the stricter). */
 	joint?: 'groove' | 'fillet';
 	/** Base metal thickness range of the procedure, mm. */
 	thicknessMm?: { min?: number | null; max?: number | null } | null;
@@ -77,6 +77,14 @@ export function fNumberCovers(process: string, held: number, needed: number): bo
 
 const mmText = (mm: number) => `${Math.round(mm * 10) / 10} mm`;
 
+/** '3G' is a groove position, '2F' and '2FR' fillet ones; plain 'F'..'O' follow the joint given. */
+function jointOf(position: string, fallback: 'groove' | 'fillet'): 'groove' | 'fillet' {
+	const p = position.trim().toUpperCase();
+	if (/^\dG$/.test(p)) return 'groove';
+	if (/^\dFR?$/.test(p)) return 'fillet';
+	return fallback;
+}
+
 function checkQualification(
 	q: QualificationView,
 	p: ProcedureDescription,
@@ -92,21 +100,25 @@ function checkQualification(
 			: `${q.status.state} since ${q.status.lapsesOn}`
 	});
 	const pipe = !!p.pipeOdMm;
-	const held = joint === 'fillet' ? q.ranges.fillet : pipe ? q.ranges.groovePipe : q.ranges.groove;
-	const need = positionsNeeded(p.positions);
-	const missing = need.filter((n) => !held.includes(n));
-	checks.push({
-		what: 'positions',
-		ok: need.length > 0 && missing.length === 0,
-		message:
-			need.length === 0
-				? 'the procedure lists no positions'
-				: missing.length
-					? `not qualified for ${joint} ${missing.join(', ')} (holds ${held.join(', ') || 'none'})`
-					: `${joint} ${need.join(', ')} covered (QW-461.9)`
-	});
+	for (const kind of ['groove', 'fillet'] as const) {
+		const listed = p.positions.filter((x) => jointOf(x, joint) === kind);
+		if (listed.length === 0) continue;
+		const held = kind === 'fillet' ? q.ranges.fillet : pipe ? q.ranges.groovePipe : q.ranges.groove;
+		const need = positionsNeeded(listed);
+		const missing = need.filter((n) => !held.includes(n));
+		checks.push({
+			what: 'positions',
+			ok: missing.length === 0,
+			message: missing.length
+				? `not qualified for ${kind} ${missing.join(', ')} (holds ${held.join(', ') || 'none'})`
+				: `${kind} ${need.join(', ')} covered (QW-461.9)`
+		});
+	}
+	if (p.positions.length === 0)
+		checks.push({ what: 'positions', ok: false, message: 'the procedure lists no positions' });
 	const max = p.thicknessMm?.max ?? null;
-	if (joint === 'groove' && max != null) {
+	const grooves = p.positions.some((x) => jointOf(x, joint) === 'groove');
+	if (grooves && max != null) {
 		const dep = q.ranges.depositMaxMm;
 		const ok = dep === null || max <= dep + 1e-6;
 		checks.push({
@@ -129,7 +141,7 @@ function checkQualification(
 					: `tested with F-${q.fNumber}; procedure F-${p.fNumber}`
 		});
 	}
-	if (pipe && joint === 'groove' && q.ranges.minDiameterMm != null) {
+	if (pipe && grooves && q.ranges.minDiameterMm != null) {
 		const ok = (p.pipeOdMm ?? 0) >= q.ranges.minDiameterMm - 1e-6;
 		checks.push({
 			what: 'diameter',
@@ -140,7 +152,7 @@ function checkQualification(
 	return checks;
 }
 
-/** One answer per active welder: qualified ones first (soonest lapse last), then the others. */
+/** One answer per active welder: qualified ones first (most days left first), then the others. */
 export function matchWelders(
 	p: ProcedureDescription,
 	welders: readonly WelderView[]

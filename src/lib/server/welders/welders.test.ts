@@ -321,5 +321,8 @@ describe('overview, links and procedure match', () => {
 			true
 		);
 		expect(matchWelders({ ...base, process: 'GMAW' }, [v])[0]!.checks[0]!.what).toBe('process');
+		// A WPS listing fillet and groove positions: each is checked against its own range.
+		expect(matchWelders({ ...base, positions: ['2F', '3G'] }, [v])[0]!.qualified).toBe(true); // QW-461.9: 3G fillet F, H, V
+		expect(matchWelders({ ...base, positions: ['4F'] }, [v])[0]!.qualified).toBe(false); // QW-461.9: 3G has no fillet O
 	});
 });
