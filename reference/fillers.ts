@@ -40,7 +40,7 @@ const a518 = (n: string, meaning: string): FillerRow => ({
 	fNumber: 6,
 	aNumber: 1,
 	suits: ['carbon-steel'],
-	meaning: `Electrode or rod, 70 ksi minimum tensile, solid wire; ${meaning}`,
+	meaning: `ER = electrode or rod, 70 = 70 ksi minimum tensile, S = solid, -${n} = ${meaning}`,
 	source: S,
 	fNumberSource: F,
 	aNumberSource: A

@@ -86,7 +86,8 @@ function a5_18(tensile: string, suffix: string, raw: string): FillerResult {
 				classification: canonical,
 				aNumber: null,
 				aNumberSource: ASME_IX_QW_442_MEMORY,
-				meaning: 'Electrode or rod, 70 ksi, solid wire; G = composition agreed with the maker',
+				meaning:
+					'ER = electrode or rod, 70 = 70 ksi minimum tensile, S = solid, -G = composition agreed with the maker',
 				inTable: false
 			}
 		};
