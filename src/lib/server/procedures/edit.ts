@@ -1,9 +1,9 @@
 // Saving a draft. Only a draft changes; the state is re-checked under the write lock and the
 // update is conditional on it, so an edit can never land on a revision submitted meanwhile.
 import type { RequestEvent } from '@sveltejs/kit';
-import type { RevisionForm } from '$lib/schemas/procedure';
+import type { RevisionForm, RevisionVariables } from '$lib/schemas/procedure';
 import { STATE_LABELS } from '$lib/procedures/options';
-import { formToVariables, recordIdsFrom } from '$lib/procedures/variables';
+import { deriveGroupings, formToVariables, recordIdsFrom } from '$lib/procedures/variables';
 import { audit } from '../audit';
 import type { SessionUser } from '../auth/session-user';
 import { write } from '../db';
@@ -19,14 +19,36 @@ export const notDraftMessage = (rev: number, state: string) =>
 		: `Revision ${rev} is ${STATE_LABELS[state as keyof typeof STATE_LABELS]?.toLowerCase() ?? state}` +
 			`${state === 'approved' ? ' and signed' : ''}; it can no longer be edited. Start a new revision to change it.`;
 
-export async function updateDraft(
+/** Saves the editor's form (text in the member's units). */
+export function updateDraft(
 	actor: SessionUser,
 	procedureId: number,
 	rev: number,
 	form: RevisionForm,
 	event: RequestEvent | null = null
 ): Promise<void> {
-	const variables = formToVariables(form);
+	return saveDraft(
+		actor,
+		procedureId,
+		rev,
+		{
+			variables: formToVariables(form),
+			pqrIds: form.pqrIds,
+			recordIds: recordIdsFrom(form.recordIds)
+		},
+		event
+	);
+}
+
+/** Saves a whole variables document (SI, as the API sends it) with the revision's links. */
+export async function saveDraft(
+	actor: SessionUser,
+	procedureId: number,
+	rev: number,
+	input: { variables: RevisionVariables; pqrIds: number[]; recordIds: number[] },
+	event: RequestEvent | null = null
+): Promise<void> {
+	const variables = deriveGroupings(input.variables);
 	await write(async (t) => {
 		const me = await actingMember(actor, AUTHOR_ROLES, t);
 		const procedure = await findProcedure(actor, procedureId, t);
@@ -48,7 +70,7 @@ export async function updateDraft(
 		if (n !== 1) throw new RefusedError(notDraftMessage(rev, 'in-review'));
 		const links = await setLinks(
 			revision,
-			{ pqrIds: form.pqrIds, recordIds: recordIdsFrom(form.recordIds) },
+			{ pqrIds: input.pqrIds, recordIds: input.recordIds },
 			t,
 			{ actor: actorOf(me), event, number: procedure.number }
 		);

@@ -7,7 +7,7 @@ import { readVariables } from './find';
 
 export * from './access';
 export { createProcedure } from './create';
-export { notDraftMessage, updateDraft } from './edit';
+export { notDraftMessage, saveDraft, updateDraft } from './edit';
 export { approveRevision, OWN_WORK, returnRevision, WRONG_PASSWORD } from './decide';
 export { checkIntegrity, revisionContent, type Integrity } from './digest';
 export { findProcedure, findRevision, readVariables } from './find';

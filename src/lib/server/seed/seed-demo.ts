@@ -3,6 +3,7 @@ import { write } from '../db/write-queue';
 import { Shop, User } from '../models';
 import { DEMO_PEOPLE, DEMO_SHOP, OTHER_PEOPLE, OTHER_SHOP, type DemoPerson } from './demo-people';
 import { seedWelders } from './seed-welders';
+import { seedProcedures } from './seed-procedures';
 import { seedRecords } from './seed-records';
 
 async function seedShop(name: string, people: DemoPerson[]): Promise<Shop> {
@@ -37,5 +38,6 @@ export async function seedDemo(): Promise<{ shop: Shop; other: Shop }> {
 	const other = await seedShop(OTHER_SHOP, OTHER_PEOPLE);
 	await seedWelders(shop);
 	await seedRecords(shop);
+	await seedProcedures(shop);
 	return { shop, other };
 }

@@ -1,0 +1,32 @@
+import { mkdtempSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { describe, expect, it } from 'vitest';
+
+const dir = mkdtempSync(join(tmpdir(), 'beadline-seed-procedures-'));
+process.env.DATABASE_FILE = join(dir, 'test.sqlite');
+process.env.UPLOADS_DIR = join(dir, 'uploads');
+
+const { migrate } = await import('../db');
+const { seedDemo } = await import('./seed-demo');
+const { seedProcedures } = await import('./seed-procedures');
+const { Pqr, Procedure, ProcedureRevision } = await import('../models');
+const { checkIntegrity } = await import('../procedures');
+
+describe('demo procedures', () => {
+	it('has a revision in every state, signed ones intact, and seeding again changes nothing', async () => {
+		await migrate();
+		const { shop } = await seedDemo();
+		const revisions = await ProcedureRevision.findAll({ where: { shopId: shop.id } });
+		expect(new Set(revisions.map((r) => r.state))).toEqual(
+			new Set(['draft', 'in-review', 'approved', 'superseded', 'withdrawn'])
+		);
+		for (const r of revisions.filter((x) =>
+			['approved', 'superseded', 'withdrawn'].includes(x.state)
+		))
+			expect(await checkIntegrity(r.id)).toMatchObject({ signed: true, ok: true });
+		expect(await Pqr.count({ where: { shopId: shop.id, state: 'certified' } })).toBe(4);
+		expect(await seedProcedures(shop)).toBe(0);
+		expect(await Procedure.count({ where: { shopId: shop.id } })).toBe(4);
+	});
+});

@@ -1,0 +1,45 @@
+import { fail, redirect } from '@sveltejs/kit';
+import { superValidate } from 'sveltekit-superforms';
+import { zod4 } from 'sveltekit-superforms/adapters';
+import { requireRole } from '$lib/server/auth/guards';
+import { AUTHOR_ROLES } from '$lib/server/procedures';
+import { CERTIFIED_MESSAGE, findPqr, readPqr, updatePqr } from '$lib/server/pqrs';
+import { refuse, rethrowAsHttp } from '$lib/server/procedures/form-errors';
+import { pqrToForm } from '$lib/procedures/pqr-values';
+import { pqrFormSchema } from '$lib/schemas/pqr';
+import type { Actions, PageServerLoad } from './$types';
+
+const schema = zod4(pqrFormSchema);
+
+export const load: PageServerLoad = async (event) => {
+	const user = requireRole(event, ...AUTHOR_ROLES);
+	try {
+		const p = await findPqr(user, Number(event.params.id));
+		const head = { id: p.id, number: p.number };
+		if (p.state !== 'draft') return { head, refused: CERTIFIED_MESSAGE, form: null };
+		const { values, tests } = readPqr(p);
+		const form = await superValidate(
+			pqrToForm({ number: p.number, title: p.title, values, tests }, user.unitSystem),
+			schema,
+			{ errors: false }
+		);
+		return { head, refused: null, form };
+	} catch (e) {
+		rethrowAsHttp(e);
+	}
+};
+
+export const actions: Actions = {
+	save: async (event) => {
+		const user = requireRole(event, ...AUTHOR_ROLES);
+		const id = Number(event.params.id);
+		const form = await superValidate(event.request, schema);
+		if (!form.valid) return fail(400, { form });
+		try {
+			await updatePqr(user, id, form.data, event);
+		} catch (e) {
+			return refuse(form, e);
+		}
+		redirect(303, `/pqrs/${id}?done=saved`);
+	}
+};

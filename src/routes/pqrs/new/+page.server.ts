@@ -1,0 +1,34 @@
+import { fail, redirect } from '@sveltejs/kit';
+import { superValidate } from 'sveltekit-superforms';
+import { zod4 } from 'sveltekit-superforms/adapters';
+import { requireRole } from '$lib/server/auth/guards';
+import { AUTHOR_ROLES, nextNumber } from '$lib/server/procedures';
+import { createPqr } from '$lib/server/pqrs';
+import { refuse } from '$lib/server/procedures/form-errors';
+import { pqrFormSchema } from '$lib/schemas/pqr';
+import type { Actions, PageServerLoad } from './$types';
+
+const schema = zod4(pqrFormSchema);
+
+export const load: PageServerLoad = async (event) => {
+	const user = requireRole(event, ...AUTHOR_ROLES);
+	const number = await nextNumber(user.shopId, 'pqr', 'GTAW');
+	return {
+		form: await superValidate({ units: user.unitSystem, number }, schema, { errors: false })
+	};
+};
+
+export const actions: Actions = {
+	save: async (event) => {
+		const user = requireRole(event, ...AUTHOR_ROLES);
+		const form = await superValidate(event.request, schema);
+		if (!form.valid) return fail(400, { form });
+		let id: number;
+		try {
+			({ id } = await createPqr(user, form.data, event));
+		} catch (e) {
+			return refuse(form, e);
+		}
+		redirect(303, `/pqrs/${id}?done=saved`);
+	}
+};
