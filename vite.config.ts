@@ -9,6 +9,8 @@ export default defineConfig({
 		environment: 'node',
 		// SQLite files per test file; keep workers few so native builds stay light on 2 cores.
 		maxWorkers: 2,
-		testTimeout: 20_000
+		testTimeout: 30_000,
+		// Files that migrate and seed a fresh database in beforeAll need more than the 10 s default.
+		hookTimeout: 60_000
 	}
 });
