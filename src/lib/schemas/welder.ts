@@ -36,9 +36,13 @@ export const pastDate = (what: string) =>
 		);
 
 export const welderSchema = z.object({
-	name: z.string().trim().min(1, 'Enter the welder’s name.').max(120, 'Keep it under 120.'),
+	name: z
+		.string('Enter the welder’s name.')
+		.trim()
+		.min(1, 'Enter the welder’s name.')
+		.max(120, 'Keep it under 120.'),
 	stamp: z
-		.string()
+		.string('Enter the shop’s welder ID or stamp.')
 		.trim()
 		.min(1, 'Enter the shop’s welder ID or stamp.')
 		.max(20, 'Keep the ID under 20 characters.')
@@ -54,9 +58,13 @@ export const welderSchema = z.object({
 		.string()
 		.default('')
 		.refine((s) => s === '' || z.uuid().safeParse(s).success, 'Pick an account from the list.'),
-	active: z.boolean().default(true)
+	// No default: an unticked checkbox posts nothing and must read as false.
+	active: z.boolean()
 });
 export type WelderInput = z.output<typeof welderSchema>;
+
+/** The API's body: `active` may be left out (a new welder is active). */
+export const welderApiSchema = welderSchema.extend({ active: z.boolean().default(true) });
 
 const length = (what: string, required: boolean) =>
 	z

@@ -11,7 +11,7 @@ import type { Actions, PageServerLoad } from './$types';
 export const load: PageServerLoad = async (event) => {
 	const user = requireRole(event, ...MANAGE_ROLES);
 	return {
-		form: await superValidate(zod4(welderSchema)),
+		form: await superValidate({ active: true }, zod4(welderSchema), { errors: false }),
 		accounts: await linkableAccounts(user.shopId)
 	};
 };

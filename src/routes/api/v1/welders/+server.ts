@@ -5,7 +5,7 @@ import { MANAGE_ROLES, VIEW_ROLES } from '$lib/server/welders/access';
 import { localDay } from '$lib/server/welders/dates';
 import { loadWelders } from '$lib/server/welders/read';
 import { createWelder } from '$lib/server/welders/welders';
-import { welderSchema } from '$lib/schemas/welder';
+import { welderApiSchema } from '$lib/schemas/welder';
 
 /** Every welder of the caller's shop with each qualification's status today. */
 export const GET = api(async (event) => {
@@ -17,7 +17,7 @@ export const GET = api(async (event) => {
 
 export const POST = api(async (event) => {
 	const user = await apiMember(event, ...MANAGE_ROLES);
-	const body = await readBody(event, welderSchema);
+	const body = await readBody(event, welderApiSchema);
 	const w = await createWelder(user, body, event).catch(apiRefusal);
 	return json({ id: w.id, name: w.name, stamp: w.stamp }, { status: 201 });
 });
