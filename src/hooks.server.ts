@@ -4,11 +4,14 @@ import { randomBytes } from 'node:crypto';
 import { authHandle } from '$lib/server/auth/auth-js';
 import { currentMember } from '$lib/server/auth/current-member';
 import { migrate } from '$lib/server/db';
+import { sweepUploads } from '$lib/server/maintenance/upload-sweep';
 import { startJobTimers } from '$lib/server/jobs/timer';
 import { building } from '$app/environment';
 
 export const init: ServerInit = async () => {
 	await migrate();
+	// After a crash: unfinished and unreferenced uploads move aside before any request is served.
+	if (!building) await sweepUploads(new Date(Date.now() - process.uptime() * 1000));
 	// The hourly lapse-notice run; never while building (BEADLINE_JOBS=off leaves it to cron).
 	if (!building) startJobTimers();
 };

@@ -83,11 +83,14 @@ export async function referencedUploads(db: SqliteFile): Promise<Set<string>> {
 }
 
 /** Files under `dir`, relative, with `/` separators; `.part` files are uploads still in flight. */
-export async function listFiles(dir: string): Promise<string[]> {
+export async function listFiles(
+	dir: string,
+	opts: { withParts?: boolean } = {}
+): Promise<string[]> {
 	if (!existsSync(dir)) return [];
 	const entries = await readdir(dir, { recursive: true, withFileTypes: true });
 	return entries
-		.filter((e) => e.isFile() && !e.name.endsWith('.part'))
+		.filter((e) => e.isFile() && (opts.withParts || !e.name.endsWith('.part')))
 		.map((e) => relative(dir, join(e.parentPath, e.name)).split(sep).join('/'))
 		.sort();
 }

@@ -1,0 +1,230 @@
+// npm run bench [-- --no-build --seconds 10 --connections 10 --no-lighthouse --keep]
+// Builds and starts the production server on a throw-away seeded database, grows one shop from
+// 1k to 100k settings records (timing its list at each size), then loads each route with
+// autocannon beside a bare JSON endpoint of the same server, times the procedure sheet, audits
+// two pages with Lighthouse and prints the server's memory. Figures also go to bench-results/.
+import { spawn, spawnSync } from 'node:child_process';
+import { existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { createServer } from 'node:net';
+import { cpus, tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { stackEnv, startCatcher } from './lib/local-stack';
+import { openSqlite } from './lib/sqlite-file';
+import { signInCookie, timeSequential, waitFor } from './bench/http';
+import { load, type LoadResult, type Route } from './bench/load';
+import { benchPerson, prepareBench } from './bench/prepare';
+import { printFigures, writeFigures, type BenchFigures, type GrowthRow } from './bench/report';
+import { addProcedures, addRecords, addShops, countRecords } from './bench/seed-bulk';
+
+const arg = (name: string, fallback: number) => {
+	const i = process.argv.indexOf(name);
+	return i >= 0 ? Number(process.argv[i + 1]) : fallback;
+};
+const flag = (name: string) => process.argv.includes(name);
+const SECONDS = arg('--seconds', 10);
+const CONNECTIONS = arg('--connections', 10);
+/** The sizes the list is timed at; the last one stays for the load runs. */
+const GROWTH = [1_000, 10_000, 100_000];
+const OTHER_SHOPS = ['Bench Shop A', 'Bench Shop B', 'Bench Shop C', 'Bench Shop D'];
+const notes: string[] = [];
+
+function freePort(): Promise<number> {
+	return new Promise((resolve) => {
+		const s = createServer().listen(0, '127.0.0.1', () => {
+			const { port } = s.address() as { port: number };
+			s.close(() => resolve(port));
+		});
+	});
+}
+
+function memoryMb(pid: number): { afterMb: number; peakMb: number } {
+	const status = readFileSync(`/proc/${pid}/status`, 'utf8');
+	const kb = (key: string) => Number(new RegExp(`${key}:\\s+(\\d+)`).exec(status)?.[1] ?? NaN);
+	return { afterMb: Math.round(kb('VmRSS') / 1024), peakMb: Math.round(kb('VmHWM') / 1024) };
+}
+
+const buildDir = process.env.BUILD_DIR ?? 'build';
+if (!flag('--no-build') || !existsSync(`${buildDir}/index.js`)) {
+	console.log(`Building the app into ${buildDir}/ …`);
+	const built = spawnSync('npx', ['vite', 'build', '--logLevel', 'warn'], { stdio: 'inherit' });
+	if (built.status !== 0) process.exit(built.status ?? 1);
+}
+
+const dataDir = mkdtempSync(join(tmpdir(), 'beadline-bench-'));
+const port = await freePort();
+stackEnv({ dataDir, port, smtpPort: await freePort() });
+Object.assign(process.env, {
+	BEADLINE_JOBS: 'off',
+	SIGNIN_LIMIT_IP_PER_MINUTE: '100000',
+	FORM_LIMIT_IP_PER_MINUTE: '100000'
+});
+const origin = `http://localhost:${port}`;
+
+// ---- data: the app's own rows first, then bulk clones of them ----
+const seedStart = Date.now();
+const fx = await prepareBench();
+const db = await openSqlite(process.env.DATABASE_FILE!, { mustExist: true });
+const templates = await db.all('SELECT * FROM settings_records WHERE shop_id = ?', [fx.shopId]);
+const procTemplate = {
+	procedure: (await db.get('SELECT * FROM procedures WHERE id = ?', [fx.template.procedureId]))!,
+	revision: (await db.get('SELECT * FROM procedure_revisions WHERE procedure_id = ?', [
+		fx.template.procedureId
+	]))!
+};
+const authors = await db.all<{ id: string }>(
+	"SELECT id FROM users WHERE shop_id = ? AND role IN ('engineer', 'admin')",
+	[fx.shopId]
+);
+const larkspur = { shopId: fx.shopId, authorIds: authors.map((a) => a.id) };
+for (const shop of await addShops(db, OTHER_SHOPS)) {
+	await addRecords(db, shop, 2_500, templates);
+	await addProcedures(db, shop, 1_000, procTemplate, 'WPS-B');
+}
+await addProcedures(db, larkspur, 6_000, procTemplate, 'WPS');
+const topUp = async (target: number) => {
+	const have = await countRecords(db, fx.shopId);
+	if (have < target) await addRecords(db, larkspur, target - have, templates);
+};
+await topUp(GROWTH[0]!);
+const seedSeconds = (Date.now() - seedStart) / 1000;
+
+// ---- the server ----
+await startCatcher();
+const server = spawn(process.execPath, [`${buildDir}/index.js`], {
+	env: process.env,
+	stdio: ['ignore', 'ignore', 'inherit']
+});
+await waitFor(`${origin}/api/v1/health`);
+const engineer = await signInCookie(
+	origin,
+	benchPerson('engineer').email,
+	benchPerson('engineer').password
+);
+const welder = await signInCookie(
+	origin,
+	benchPerson('welder').email,
+	benchPerson('welder').password
+);
+const asEngineer = { cookie: engineer };
+const filter = '/records?process=GTAW&family=carbon-steel&tmin=1%2F16&tmax=1%2F4';
+
+// ---- list latency as the shop grows ----
+const growth: GrowthRow[] = [];
+const growStart = Date.now();
+for (const size of GROWTH) {
+	const t = Date.now();
+	await topUp(size);
+	if (size > GROWTH[0]!)
+		console.log(`  grew the shop to ${size} records in ${(Date.now() - t) / 1000} s`);
+	await db.exec('PRAGMA wal_checkpoint(TRUNCATE)');
+	growth.push({
+		records: await countRecords(db, fx.shopId),
+		list: await timeSequential(origin + '/records', asEngineer, 30),
+		filtered: await timeSequential(origin + filter, asEngineer, 30)
+	});
+}
+const seededTotal = seedSeconds + (Date.now() - growStart) / 1000;
+
+// ---- the booth link, read off the approved revision's page as a member sees it ----
+const revisionPage = await fetch(
+	`${origin}/procedures/${fx.approved.procedureId}/revisions/${fx.approved.rev}`,
+	{ headers: asEngineer }
+).then((r) => r.text());
+const booth = /href="(\/b\/[A-Za-z0-9_-]{16,})"/.exec(revisionPage)?.[1];
+if (!booth)
+	notes.push('No booth link (/b/…) on the approved revision page: booth view not measured.');
+
+// ---- load: every route in the same run, bare endpoint first ----
+const checksBody = JSON.stringify({
+	process: 'GTAW',
+	currentType: 'DCEN',
+	amps: 125,
+	volts: 12,
+	travelSpeed: { value: 4, unit: 'in/min' },
+	thickness: { value: 0.125, unit: 'in' },
+	baseMetal: { spec: 'A36' },
+	filler: { classification: 'ER70S-6', diameter: { value: 0.09375, unit: 'in' } },
+	tungsten: { classification: 'EWLa-1.5', diameter: { value: 2.4, unit: 'mm' } },
+	gas: { name: 'argon', flow: { value: 20, unit: 'CFH' } }
+});
+const routes: Route[] = [
+	{ name: '/api/v1/health (bare)', path: '/api/v1/health' },
+	{
+		name: '/api/v1/checks (token)',
+		path: '/api/v1/checks',
+		method: 'POST',
+		headers: { authorization: `Bearer ${fx.token}`, 'content-type': 'application/json' },
+		body: checksBody
+	},
+	{ name: '/procedures (engineer)', path: '/procedures', headers: asEngineer },
+	{ name: '/records?filter (engineer)', path: filter, headers: asEngineer },
+	...(booth
+		? [
+				{ name: '/b/… (signed out: status)', path: booth },
+				{ name: '/b/… (welder: values)', path: booth, headers: { cookie: welder } }
+			]
+		: [])
+];
+const results: LoadResult[] = [];
+for (const r of routes) {
+	process.stdout.write(`  loading ${r.name} … `);
+	const res = await load(origin, r, { seconds: SECONDS, connections: CONNECTIONS });
+	res.ratioToBare = results[0] ? res.reqPerSec / results[0].reqPerSec : 1;
+	results.push(res);
+	console.log(`${res.reqPerSec} req/s`);
+}
+
+// ---- the procedure sheet: the booth engineer's timing part (it prints its own table) ----
+let sheets: BenchFigures['sheets'];
+if (existsSync('scripts/bench/sheets.ts')) {
+	const { benchSheets } = await import('./bench/sheets');
+	sheets = await benchSheets({ origin, cookie: engineer, ...fx.approved });
+} else notes.push('scripts/bench/sheets.ts is not there yet: sheet PDF timing left out.');
+
+// ---- Lighthouse on the login page and the booth view ----
+let lighthouse: BenchFigures['lighthouse'];
+if (!flag('--no-lighthouse')) {
+	const { audit } = await import('./bench/lighthouse');
+	lighthouse = await audit(
+		origin,
+		[
+			{ name: 'sign-in page', path: '/signin' },
+			...(booth
+				? [
+						{ name: 'booth view (signed out)', path: booth },
+						{ name: 'booth view (welder)', path: booth, cookie: welder }
+					]
+				: [])
+		],
+		await freePort()
+	);
+}
+
+const rss = memoryMb(server.pid!);
+const data = {
+	shops: Number((await db.get<{ n: number }>('SELECT count(*) AS n FROM shops'))!.n),
+	'settings records': await countRecords(db),
+	'in the measured shop': await countRecords(db, fx.shopId),
+	procedures: Number((await db.get<{ n: number }>('SELECT count(*) AS n FROM procedures'))!.n),
+	'seconds to seed': Math.round(seededTotal * 10) / 10
+};
+await db.close();
+server.kill('SIGTERM');
+if (!flag('--keep')) rmSync(dataDir, { recursive: true, force: true });
+else notes.push(`Data kept in ${dataDir}`);
+
+const figures: BenchFigures = {
+	at: new Date().toISOString(),
+	machine: { node: process.version, cores: cpus().length, platform: process.platform },
+	settings: { seconds: SECONDS, connections: CONNECTIONS },
+	data,
+	routes: results,
+	growth,
+	sheets,
+	lighthouse,
+	rss,
+	notes
+};
+printFigures(figures);
+console.log(`\nFigures written to ${writeFigures(figures)}`);
+process.exit(0);

@@ -1,0 +1,120 @@
+// Prints the bench's figures as plain tables and writes the same figures as JSON.
+import { mkdirSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
+import type { PageAudit } from './lighthouse';
+import type { LoadResult } from './load';
+import type { Timing } from './http';
+import type { SheetFigures } from './sheets';
+
+export interface GrowthRow {
+	records: number;
+	list: Timing;
+	filtered: Timing;
+}
+
+export interface BenchFigures {
+	at: string;
+	machine: { node: string; cores: number; platform: string };
+	settings: { seconds: number; connections: number };
+	data: Record<string, number>;
+	routes: LoadResult[];
+	growth: GrowthRow[];
+	sheets?: SheetFigures;
+	lighthouse?: PageAudit[];
+	rss: { afterMb: number; peakMb: number };
+	notes: string[];
+}
+
+const pad = (s: unknown, n: number) => String(s).padEnd(n);
+const lpad = (s: unknown, n: number) => String(s).padStart(n);
+
+export function printFigures(f: BenchFigures): void {
+	const line = (cells: [unknown, number, boolean?][]) =>
+		console.log(cells.map(([c, n, left]) => (left ? pad(c, n) : lpad(c, n))).join('  '));
+	console.log(`\nBeadline bench ${f.at} — Node ${f.machine.node}, ${f.machine.cores} cores`);
+	console.log(
+		`Each route: ${f.settings.seconds} s with ${f.settings.connections} connections (autocannon), one server, one run.`
+	);
+	console.log(
+		`Data: ${Object.entries(f.data)
+			.map(([k, v]) => `${k} ${v.toLocaleString('en-US')}`)
+			.join(', ')}\n`
+	);
+	line([
+		['route', 44, true],
+		['req/s', 7],
+		['p50 ms', 7],
+		['p99 ms', 7],
+		['errors', 7],
+		['non-2xx', 7],
+		['vs bare', 8]
+	]);
+	for (const r of f.routes)
+		line([
+			[`${r.method} ${r.name}`, 44, true],
+			[r.reqPerSec, 7],
+			[r.p50Ms, 7],
+			[r.p99Ms, 7],
+			[r.errors, 7],
+			[r.non2xx, 7],
+			[r.ratioToBare === undefined ? '' : `${(r.ratioToBare * 100).toFixed(1)} %`, 8]
+		]);
+
+	console.log('\nList latency as a shop’s records grow (one request at a time; median / p95 ms)');
+	line([
+		['records in shop', 16, true],
+		['/records', 16],
+		['/records?filter', 18]
+	]);
+	for (const g of f.growth)
+		line([
+			[g.records.toLocaleString('en-US'), 16, true],
+			[`${g.list.medianMs} / ${g.list.p95Ms}`, 16],
+			[`${g.filtered.medianMs} / ${g.filtered.p95Ms}`, 18]
+		]);
+
+	if (f.sheets)
+		console.log(
+			`\nProcedure sheet PDF: median ${f.sheets.medianMs} ms (p95 ${f.sheets.p95Ms}), ${f.sheets.batch.sheetsPerSec} sheets/s in a batch of ${f.sheets.batch.sheets}` +
+				(f.sheets.http ? `; download median ${f.sheets.http.medianMs} ms` : '')
+		);
+	if (f.lighthouse?.length) {
+		console.log('\nLighthouse 12 (mobile emulation, default throttling)');
+		line([
+			['page', 30, true],
+			['perf', 5],
+			['a11y', 5],
+			['best', 5],
+			['FCP ms', 7],
+			['LCP ms', 7],
+			['TBT ms', 7],
+			['CLS', 6],
+			['KB', 7],
+			['reqs', 5]
+		]);
+		for (const a of f.lighthouse)
+			line([
+				[a.name, 30, true],
+				[a.scores.performance ?? '-', 5],
+				[a.scores.accessibility ?? '-', 5],
+				[a.scores['best-practices'] ?? '-', 5],
+				[a.fcpMs, 7],
+				[a.lcpMs, 7],
+				[a.tbtMs, 7],
+				[a.cls, 6],
+				[a.totalKb, 7],
+				[a.requests, 5]
+			]);
+	}
+	console.log(`\nServer RSS after the run: ${f.rss.afterMb} MB (peak ${f.rss.peakMb} MB)`);
+	for (const n of f.notes) console.log(`Note: ${n}`);
+}
+
+export function writeFigures(f: BenchFigures, dir = 'bench-results'): string {
+	mkdirSync(dir, { recursive: true });
+	const file = join(dir, `bench-${f.at.replace(/[:.]/g, '-')}.json`);
+	const text = JSON.stringify(f, null, '\t') + '\n';
+	writeFileSync(file, text);
+	writeFileSync(join(dir, 'latest.json'), text);
+	return file;
+}
