@@ -2,7 +2,7 @@
 // CSV export. Events are append-only; before and after are shown as the paths that changed.
 import { Op, type WhereOptions } from 'sequelize';
 import type { SessionUser } from '../auth/session-user';
-import { AuditEvent, ProcedureRevision } from '../models';
+import { AuditEvent, ProcedureRevision, RevisionRecord } from '../models';
 
 export interface TrailEntry {
 	id: number;
@@ -64,7 +64,7 @@ const entry = (e: AuditEvent): TrailEntry => ({
 	ip: e.ip
 });
 
-/** A procedure's own events and those of all its revisions, oldest first. */
+/** A procedure's own events, its revisions', and the freezing of the records it cites. */
 export async function procedureTrail(
 	actor: SessionUser,
 	procedureId: number
@@ -73,12 +73,21 @@ export async function procedureTrail(
 		where: { procedureId, shopId: actor.shopId },
 		attributes: ['id']
 	});
+	const cited = await RevisionRecord.findAll({
+		where: { shopId: actor.shopId, revisionId: { [Op.in]: revs.map((r) => r.id) } },
+		attributes: ['recordId']
+	});
 	const events = await AuditEvent.findAll({
 		where: {
 			shopId: actor.shopId,
 			[Op.or]: [
 				{ objectType: 'procedure', objectId: String(procedureId) },
-				{ objectType: 'procedure_revision', objectId: { [Op.in]: revs.map((r) => String(r.id)) } }
+				{ objectType: 'procedure_revision', objectId: { [Op.in]: revs.map((r) => String(r.id)) } },
+				{
+					objectType: 'settings_record',
+					action: 'settings_record.frozen',
+					objectId: { [Op.in]: cited.map((c) => String(c.recordId)) }
+				}
 			]
 		},
 		order: [['id', 'ASC']],
