@@ -9,6 +9,7 @@ import {
 	withdrawRevision
 } from '$lib/server/procedures';
 import { refusal, rethrowAsHttp } from '$lib/server/procedures/form-errors';
+import { describeRevision, weldersForProcedure } from '$lib/server/welders/procedure-welders';
 import { withdrawSchema } from '$lib/schemas/procedure';
 import type { Actions, PageServerLoad } from './$types';
 
@@ -19,8 +20,11 @@ export const load: PageServerLoad = async (event) => {
 	const user = requireRole(event, ...VIEW_ROLES);
 	const [id, rev] = ids(event.params);
 	try {
+		const view = await getRevision(user, id, rev, event);
 		return {
-			view: await getRevision(user, id, rev, event),
+			view,
+			// Who can weld to this revision today (issue #7's procedure match).
+			welders: await weldersForProcedure(user, describeRevision(view.variables)),
 			system: user.unitSystem,
 			flash: event.url.searchParams.get('done')
 		};
