@@ -1,5 +1,6 @@
 import { ApiToken } from './api-token';
 import { AuditEvent } from './audit-event';
+import { BoothLink, BoothLookup } from './booth-link';
 import { Account, Session, VerificationToken } from './auth-tables';
 import { Invite } from './invite';
 import { Procedure, ProcedureNumbering } from './procedure';
@@ -35,10 +36,17 @@ ProcedureRevision.hasMany(RevisionRecord, { foreignKey: 'revisionId', as: 'recor
 Pqr.hasMany(PqrReport, { foreignKey: 'pqrId', as: 'reports' });
 Pqr.hasMany(PqrAddendum, { foreignKey: 'pqrId', as: 'addenda' });
 
+// Booth links (issue #6): the sheet's QR link of a revision, and its lookups.
+ProcedureRevision.hasMany(BoothLink, { foreignKey: 'revisionId', as: 'boothLinks' });
+BoothLink.belongsTo(ProcedureRevision, { foreignKey: 'revisionId' });
+BoothLink.hasMany(BoothLookup, { foreignKey: 'linkId', as: 'lookups' });
+
 export {
 	Account,
 	ApiToken,
 	AuditEvent,
+	BoothLink,
+	BoothLookup,
 	Invite,
 	Pqr,
 	PqrAddendum,

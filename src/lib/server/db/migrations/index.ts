@@ -4,6 +4,7 @@ import * as apiTokens from './0002-api-tokens';
 import * as settingsRecords from './0003-settings-records';
 import * as procedures from './0004-procedures';
 import * as welders from './0005-welders';
+import * as boothLinks from './0006-booth-links';
 
 export interface Migration {
 	name: string;
@@ -18,5 +19,6 @@ export const migrations: Migration[] = [
 	{ name: '0002-api-tokens', ...apiTokens },
 	{ name: '0003-settings-records', ...settingsRecords },
 	{ name: '0004-procedures', ...procedures },
-	{ name: '0005-welders', ...welders }
+	{ name: '0005-welders', ...welders },
+	{ name: '0006-booth-links', ...boothLinks }
 ];
