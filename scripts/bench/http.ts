@@ -8,7 +8,7 @@ export async function signInCookie(
 	const res = await fetch(`${origin}/signin?/password`, {
 		method: 'POST',
 		redirect: 'manual',
-		headers: { origin, 'content-type': 'application/x-www-form-urlencoded' },
+		headers: { origin, accept: 'text/html', 'content-type': 'application/x-www-form-urlencoded' },
 		body: new URLSearchParams({ email, password, redirectTo: '/' })
 	});
 	const cookie = res.headers
