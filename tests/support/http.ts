@@ -1,0 +1,53 @@
+// Plain HTTP against the shared end-to-end server, for the tests that send requests rather than
+// click: its origin, a signed-in cookie per person, and its database file (read-only checks).
+import { join } from 'node:path';
+import { signInCookie } from '../../scripts/bench/http';
+import { openSqlite, type SqliteFile } from '../../scripts/lib/sqlite-file';
+
+export const origin = () => `http://localhost:${process.env.E2E_PORT}`;
+
+const cookies = new Map<string, Promise<string>>();
+/** One sign-in per person and worker: the session cookie, as a browser would send it. */
+export function cookieOf(who: { email: string; password: string }): Promise<string> {
+	let c = cookies.get(who.email);
+	if (!c) {
+		c = signInCookie(origin(), who.email, who.password);
+		cookies.set(who.email, c);
+	}
+	return c;
+}
+
+export function postJson(path: string, cookie: string, body: unknown): Promise<Response> {
+	return fetch(origin() + path, {
+		method: 'POST',
+		redirect: 'manual',
+		headers: { cookie, origin: origin(), 'content-type': 'application/json' },
+		body: JSON.stringify(body)
+	});
+}
+
+/** A form post as a browser sends it without JavaScript (so SvelteKit answers with HTML). */
+export function postForm(
+	path: string,
+	cookie: string,
+	fields: Record<string, string> | FormData
+): Promise<Response> {
+	const body = fields instanceof FormData ? fields : new URLSearchParams(fields);
+	return fetch(origin() + path, {
+		method: 'POST',
+		redirect: 'manual',
+		headers: { cookie, origin: origin(), accept: 'text/html' },
+		body
+	});
+}
+
+export async function withE2eDatabase<T>(work: (db: SqliteFile) => Promise<T>): Promise<T> {
+	const db = await openSqlite(join(process.env.E2E_DATA_DIR ?? '', 'beadline.sqlite'), {
+		readonly: true
+	});
+	try {
+		return await work(db);
+	} finally {
+		await db.close();
+	}
+}
