@@ -112,7 +112,13 @@ export function flattenApiBody(raw: unknown): unknown {
 	return out;
 }
 
-export const settingsRecordApiSchema = z.preprocess(flattenApiBody, settingsRecordSchema);
+/** The API's body; a record sent without a date is taken as welded today (UTC). */
+export const settingsRecordApiSchema = z.preprocess((raw) => {
+	const flat = flattenApiBody(raw);
+	if (flat && typeof flat === 'object' && !('weldedOn' in flat))
+		return { ...flat, weldedOn: new Date().toISOString().slice(0, 10) };
+	return flat;
+}, settingsRecordSchema);
 
 // ---- the list's filters, read from the URL; a value that does not read is dropped ----
 
