@@ -7,6 +7,7 @@ import type { RequestEvent } from '@sveltejs/kit';
 import { Op, type Transaction } from 'sequelize';
 import { ROLE_LABELS } from '$lib/roles';
 import { audit } from '../audit';
+import { issueBoothLink } from '../booth/links';
 import { verifyPassword } from '../auth/password';
 import type { SessionUser } from '../auth/session-user';
 import { write } from '../db';
@@ -117,6 +118,7 @@ async function decide(
 					t
 				);
 			}
+			await issueBoothLink(revision, t, me); // issue #6: the sheet's QR link, in this same transaction
 		}
 		await syncHead(procedureId, t);
 		await audit(

@@ -1,0 +1,67 @@
+// Booth link lookups: capped per address (the links are public, so nobody may walk the token
+// space from one place) and logged, one row a lookup, outside the audit trail.
+import type { RequestEvent } from '@sveltejs/kit';
+import { col, fn } from 'sequelize';
+import { RateLimiter } from 'sveltekit-rate-limiter/server';
+import { write } from '../db';
+import { BoothLookup } from '../models';
+import type { LookupOutcome } from '../models/booth-link';
+
+function perMinute(name: string, fallback: number): number {
+	const n = Number(process.env[name]);
+	return Number.isFinite(n) && n > 0 ? n : fallback;
+}
+
+/** A shop behind one address may have a dozen phones scanning: generous, but finite. */
+export const boothLimiter = new RateLimiter({
+	IP: [perMinute('BOOTH_LIMIT_IP_PER_MINUTE', 120), 'm']
+});
+
+function addressOf(event: RequestEvent): string | null {
+	try {
+		return event.getClientAddress().slice(0, 64);
+	} catch {
+		return null;
+	}
+}
+
+/** Best effort: a lookup that cannot be logged is still answered (and the failure is logged). */
+export async function logLookup(
+	event: RequestEvent,
+	entry: { shopId: number | null; linkId: number | null; outcome: LookupOutcome }
+): Promise<void> {
+	try {
+		await write((t) =>
+			BoothLookup.create(
+				{
+					...entry,
+					userId: event.locals.user?.id ?? null,
+					ip: addressOf(event),
+					userAgent: event.request.headers.get('user-agent')?.slice(0, 300) ?? null,
+					at: new Date()
+				},
+				{ transaction: t }
+			)
+		);
+	} catch (e) {
+		console.error('booth lookup not logged', e);
+	}
+}
+
+/** How often each link of a shop was looked up, and when last. */
+export async function lookupCounts(
+	shopId: number,
+	linkIds: number[]
+): Promise<Map<number, { count: number; last: Date | null }>> {
+	const out = new Map<number, { count: number; last: Date | null }>();
+	if (!linkIds.length) return out;
+	const rows = (await BoothLookup.findAll({
+		where: { shopId, linkId: linkIds },
+		attributes: ['linkId', [fn('COUNT', col('id')), 'count'], [fn('MAX', col('at')), 'last']],
+		group: [col('link_id')],
+		raw: true
+	})) as unknown as { linkId: number; count: number; last: string | Date | null }[];
+	for (const r of rows)
+		out.set(r.linkId, { count: Number(r.count), last: r.last ? new Date(r.last) : null });
+	return out;
+}
