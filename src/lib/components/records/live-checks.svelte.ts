@@ -46,12 +46,9 @@ export class LiveChecks {
 			});
 			const data = res.ok ? ((await res.json()) as CheckResult) : null;
 			if (controller !== this.#controller) return;
-			if (res.status === 400) {
-				// The server could not read the values; the form's own field errors say why.
-				this.status = 'refused';
-				return;
-			}
-			if (data) this.#show(data, 'ready');
+			// A 400: the server could not read a value the form can; show the browser's findings.
+			if (res.status === 400) this.#show(local(), 'refused');
+			else if (data) this.#show(data, 'ready');
 			else this.#show(local(), 'local');
 		} catch (e) {
 			if (controller.signal.aborted || controller !== this.#controller) return;
