@@ -50,9 +50,8 @@ export class LiveChecks {
 			if (res.status === 400) this.#show(local(), 'refused');
 			else if (data) this.#show(data, 'ready');
 			else this.#show(local(), 'local');
-		} catch (e) {
+		} catch {
 			if (controller.signal.aborted || controller !== this.#controller) return;
-			void e;
 			this.#show(local(), 'local');
 		}
 	}
