@@ -107,13 +107,12 @@ test('two approvals at the same moment: exactly one signs, the other hears it wa
 	const eng = await (await browser.newContext()).newPage();
 	await signIn(eng, engineer);
 	const { id } = await draftInReview(eng.request, 'RACE');
-	const [a, b] = await Promise.all(
-		[0, 1].map(async () => {
-			const p = await (await browser.newContext()).newPage();
-			await signIn(p, inspector);
-			return p;
-		})
-	);
+	const session = async () => {
+		const p = await (await browser.newContext()).newPage();
+		await signIn(p, inspector);
+		return p;
+	};
+	const [a, b] = [await session(), await session()];
 	const url = `/api/v1/procedures/${id}/revisions/1/approve`;
 	const data = { password: inspector.password, comment: '' };
 	const answers = await Promise.all([a.request.post(url, { data }), b.request.post(url, { data })]);

@@ -6,19 +6,12 @@ import { audit } from '../audit';
 import type { SessionUser } from '../auth/session-user';
 import { write } from '../db';
 import { Pqr, Procedure, ProcedureNumbering } from '../models';
+import { applyPattern } from '$lib/procedures/numbering';
 import { actingMember, actorOf } from './access';
 
-export const DEFAULT_PATTERNS = { wpsPattern: 'WPS-{seq:3}', pqrPattern: 'PQR-{seq:3}' };
+export { applyPattern };
 
-export function applyPattern(pattern: string, seq: number, process: string, now = new Date()) {
-	return pattern
-		.replace(/\{seq(?::(\d))?\}/g, (_m, width: string | undefined) =>
-			String(seq).padStart(Number(width ?? 1), '0')
-		)
-		.replace(/\{process\}/g, process)
-		.replace(/\{yyyy\}/g, String(now.getUTCFullYear()))
-		.slice(0, 40);
-}
+export const DEFAULT_PATTERNS = { wpsPattern: 'WPS-{seq:3}', pqrPattern: 'PQR-{seq:3}' };
 
 export async function patternsOf(shopId: number, t?: Transaction) {
 	const row = await ProcedureNumbering.findByPk(shopId, { transaction: t });
