@@ -32,12 +32,12 @@ export async function makeFixtures(origin: string, engineerCookie: string, datab
 	if (made.status !== 303) throw new Error(`fixture record: ${made.status}`);
 
 	const db = await openSqlite(databaseFile, { readonly: true });
-	const ids = await (async () => {
+	const ids: { pqr?: { id: number }; welder?: { id: number } } = await (async () => {
 		try {
 			const shop = `(SELECT id FROM shops WHERE name = '${DEMO_SHOP.replace(/'/g, "''")}')`;
 			return {
 				pqr: await db.get<{ id: number }>(
-					`SELECT id FROM pqrs WHERE shop_id = ${shop} ORDER BY id LIMIT 1`
+					`SELECT id FROM pqrs WHERE shop_id = ${shop} AND state = 'draft' ORDER BY id LIMIT 1`
 				),
 				welder: await db.get<{ id: number }>(
 					`SELECT id FROM welders WHERE shop_id = ${shop} ORDER BY id LIMIT 1`
@@ -47,6 +47,12 @@ export async function makeFixtures(origin: string, engineerCookie: string, datab
 			await db.close();
 		}
 	})();
+	const draft = await fetch(`${origin}/api/v1/pqrs`, {
+		method: 'POST',
+		headers: { cookie: engineerCookie, origin, 'content-type': 'application/json' },
+		body: JSON.stringify({ number: `PQR-FIXTURE-${Date.now()}`, title: 'Fixture with a report' })
+	}).then((r) => r.json() as Promise<{ id?: number }>);
+	if (draft.id) ids.pqr = { id: draft.id };
 	if (ids.pqr) {
 		const report = new FormData();
 		report.append('report', new Blob([TINY_PDF], { type: 'application/pdf' }), 'lab-report.pdf');
