@@ -1,0 +1,5 @@
+// One entry for the sheet bench, so Vite loads the sheet, its fixture and the font counter as
+// one module graph (the counter must be the instance the sheet uses).
+export { procedureSheetPdf, procedureSheetsPdf } from '../../src/lib/server/pdf/procedure-sheet';
+export { fixtureSheet } from '../../src/lib/server/pdf/sheet-fixture';
+export { fontParses } from '../../src/lib/server/pdf/font-cache';
