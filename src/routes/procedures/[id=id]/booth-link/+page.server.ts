@@ -2,6 +2,7 @@ import { fail } from '@sveltejs/kit';
 import { requireRole } from '$lib/server/auth/guards';
 import { linksOfProcedure, revokeBoothLink } from '$lib/server/booth';
 import { RefusedError } from '$lib/server/people/errors';
+import { findProcedure } from '$lib/server/procedures/find';
 import { rethrowAsHttp } from '$lib/server/people/form-errors';
 import type { Actions, PageServerLoad, RequestEvent } from './$types';
 
@@ -14,7 +15,9 @@ export const load: PageServerLoad = async (event) => {
 
 async function change(event: RequestEvent, reissue: boolean) {
 	const user = requireRole(event, 'admin');
-	const rev = Number((await event.request.formData()).get('rev'));
+	// Another shop's procedure is "not found" before anything about the form is said.
+	await findProcedure(user, Number(event.params.id)).catch(rethrowAsHttp);
+	const rev = Number((await event.request.formData().catch(() => new FormData())).get('rev'));
 	if (!Number.isInteger(rev) || rev < 1) return fail(400, { problem: 'Pick a revision.' });
 	try {
 		const r = await revokeBoothLink(user, Number(event.params.id), rev, { reissue }, event);
