@@ -39,7 +39,7 @@ test('record photos: hostile files are refused or neutralised', async () => {
 		const form = new FormData();
 		for (const [k, v] of Object.entries({ process: 'GTAW', weldedOn: '2025-04-01', notes: marker }))
 			form.set(k, v);
-		form.append('photos', new Blob([f.bytes], { type: f.type }), f.name);
+		form.append('photos', new Blob([new Uint8Array(f.bytes)], { type: f.type }), f.name);
 		const res = await postForm('/records/new?/save', cookie, form);
 		const stored = await withE2eDatabase((db) =>
 			db.all<{ id: number; photo: number }>(
@@ -99,7 +99,7 @@ test('PQR lab reports: hostile files are refused or neutralised', async () => {
 			db.get<{ n: number }>('SELECT max(id) AS n FROM pqr_reports')
 		);
 		const form = new FormData();
-		form.append('report', new Blob([f.bytes], { type: f.type }), f.name);
+		form.append('report', new Blob([new Uint8Array(f.bytes)], { type: f.type }), f.name);
 		const res = await postForm(`/pqrs/${pqr.id}?/upload`, cookie, form);
 		const added = await withE2eDatabase((db) =>
 			db.all<{ id: number }>('SELECT id FROM pqr_reports WHERE id > ? AND pqr_id = ?', [

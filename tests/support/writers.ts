@@ -90,7 +90,11 @@ export function photoWriter(ctx: WriterContext, tag: string): Promise<void> {
 			notes: marker
 		}))
 			form.set(k, v);
-		form.append('photos', new Blob([await photoBytes()], { type: 'image/png' }), 'bead.png');
+		form.append(
+			'photos',
+			new Blob([new Uint8Array(await photoBytes())], { type: 'image/png' }),
+			'bead.png'
+		);
 		const res = await fetch(`${ctx.origin}/records/new?/save`, {
 			method: 'POST',
 			redirect: 'manual',
