@@ -9,7 +9,7 @@ process.env.DATABASE_FILE = join(dir, 'test.sqlite');
 process.env.UPLOADS_DIR = join(dir, 'uploads');
 process.env.ORIGIN = 'http://booth.test';
 
-const { AuditEvent, BoothLink, ContinuityEntry, Welder } = await import('../models');
+const { AuditEvent, BoothLink, BoothLookup, ContinuityEntry, Welder } = await import('../models');
 const { ForbiddenError, NotFoundError, RefusedError } = await import('../people/errors');
 const procedures = await import('../procedures');
 const T = await import('../procedures/test-support');
@@ -110,6 +110,26 @@ describe('booth links', () => {
 			NotFoundError
 		);
 		await expect(booth.sheetFor(b.shopId, id)).rejects.toThrow(NotFoundError);
+	});
+});
+
+describe('lookups', () => {
+	it('are logged in batches with the address, and counted per link', async () => {
+		const id = await approved();
+		const link = (await BoothLink.findOne({ where: { procedureId: id } }))!;
+		const event = {
+			locals: { user: null },
+			request: new Request('http://booth.test/b/x', { headers: { 'user-agent': 'phone' } }),
+			getClientAddress: () => '10.0.0.7'
+		} as unknown as Parameters<typeof booth.logLookup>[0];
+		booth.logLookup(event, { shopId: a.shopId, linkId: link.id, outcome: 'ok' });
+		booth.logLookup(event, { shopId: a.shopId, linkId: link.id, outcome: 'ok' });
+		booth.logLookup(event, { shopId: null, linkId: null, outcome: 'unknown' });
+		const counts = await booth.lookupCounts(a.shopId, [link.id]);
+		expect(counts.get(link.id)?.count).toBe(2);
+		const row = await BoothLookup.findOne({ where: { linkId: link.id } });
+		expect(row).toMatchObject({ ip: '10.0.0.7', userAgent: 'phone', outcome: 'ok' });
+		expect(await BoothLookup.count({ where: { outcome: 'unknown' } })).toBe(1);
 	});
 });
 

@@ -1,7 +1,7 @@
 // Booth link lookups: capped per address (the links are public, so nobody may walk the token
 // space from one place) and logged, one row a lookup, outside the audit trail.
 import type { RequestEvent } from '@sveltejs/kit';
-import { col, fn } from 'sequelize';
+import { col, fn, type InferCreationAttributes } from 'sequelize';
 import { RateLimiter } from 'sveltekit-rate-limiter/server';
 import { write } from '../db';
 import { BoothLookup } from '../models';
@@ -25,26 +25,44 @@ function addressOf(event: RequestEvent): string | null {
 	}
 }
 
-/** Best effort: a lookup that cannot be logged is still answered (and the failure is logged). */
-export async function logLookup(
+type Entry = InferCreationAttributes<BoothLookup>;
+let pending: Entry[] = [];
+let timer: ReturnType<typeof setTimeout> | null = null;
+
+/** Writes the lookups gathered so far in one transaction. */
+export async function flushLookups(): Promise<void> {
+	if (timer) clearTimeout(timer);
+	timer = null;
+	const batch = pending;
+	pending = [];
+	if (!batch.length) return;
+	try {
+		await write((t) => BoothLookup.bulkCreate(batch, { transaction: t }));
+	} catch (e) {
+		console.error(`${batch.length} booth lookups not logged`, e);
+	}
+}
+
+/**
+ * Best effort and batched: a posted sheet is scanned all day, so lookups are gathered for half a
+ * second and written together instead of taking the write lock once each. A lookup that cannot be
+ * logged is still answered.
+ */
+export function logLookup(
 	event: RequestEvent,
 	entry: { shopId: number | null; linkId: number | null; outcome: LookupOutcome }
-): Promise<void> {
-	try {
-		await write((t) =>
-			BoothLookup.create(
-				{
-					...entry,
-					userId: event.locals.user?.id ?? null,
-					ip: addressOf(event),
-					userAgent: event.request.headers.get('user-agent')?.slice(0, 300) ?? null,
-					at: new Date()
-				},
-				{ transaction: t }
-			)
-		);
-	} catch (e) {
-		console.error('booth lookup not logged', e);
+): void {
+	pending.push({
+		...entry,
+		userId: event.locals.user?.id ?? null,
+		ip: addressOf(event),
+		userAgent: event.request.headers.get('user-agent')?.slice(0, 300) ?? null,
+		at: new Date()
+	});
+	if (pending.length >= 200) void flushLookups();
+	else if (!timer) {
+		timer = setTimeout(() => void flushLookups(), 500);
+		timer.unref?.();
 	}
 }
 
@@ -53,6 +71,7 @@ export async function lookupCounts(
 	shopId: number,
 	linkIds: number[]
 ): Promise<Map<number, { count: number; last: Date | null }>> {
+	await flushLookups();
 	const out = new Map<number, { count: number; last: Date | null }>();
 	if (!linkIds.length) return out;
 	const rows = (await BoothLookup.findAll({

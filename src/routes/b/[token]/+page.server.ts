@@ -21,15 +21,15 @@ const UNKNOWN = 'This booth link is unknown. Check the code on the sheet, or ask
 export const load: PageServerLoad = async (event) => {
 	event.setHeaders({ 'cache-control': 'no-store' });
 	if (await boothLimiter.isLimited(event)) {
-		await logLookup(event, { shopId: null, linkId: null, outcome: 'limited' });
+		logLookup(event, { shopId: null, linkId: null, outcome: 'limited' });
 		error(429, { message: 'Too many lookups from here. Wait a minute and scan again.' });
 	}
 	const status = await resolveBoothToken(event.params.token);
 	if (!status) {
-		await logLookup(event, { shopId: null, linkId: null, outcome: 'unknown' });
+		logLookup(event, { shopId: null, linkId: null, outcome: 'unknown' });
 		error(404, { message: UNKNOWN });
 	}
-	await logLookup(event, {
+	logLookup(event, {
 		shopId: status.shopId,
 		linkId: status.link.id,
 		outcome: status.link.revoked ? 'revoked' : 'ok'
