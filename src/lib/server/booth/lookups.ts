@@ -25,7 +25,7 @@ function addressOf(event: RequestEvent): string | null {
 	}
 }
 
-type Entry = InferCreationAttributes<BoothLookup>;
+type Entry = Omit<InferCreationAttributes<BoothLookup>, 'id'>;
 let pending: Entry[] = [];
 let timer: ReturnType<typeof setTimeout> | null = null;
 
