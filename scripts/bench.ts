@@ -125,14 +125,21 @@ for (const size of GROWTH) {
 }
 const seededTotal = seedSeconds + (Date.now() - growStart) / 1000;
 
-// ---- the booth link, read off the approved revision's page as a member sees it ----
+// ---- the booth link of the approved revision: from its table, else off the revision page ----
+const linkRow = await db
+	.get<{ token: string }>(
+		'SELECT token FROM booth_links WHERE procedure_id = ? AND revoked_at IS NULL ORDER BY id DESC',
+		[fx.approved.procedureId]
+	)
+	.catch(() => undefined);
 const revisionPage = await fetch(
 	`${origin}/procedures/${fx.approved.procedureId}/revisions/${fx.approved.rev}`,
 	{ headers: asEngineer }
 ).then((r) => r.text());
-const booth = /href="(\/b\/[A-Za-z0-9_-]{16,})"/.exec(revisionPage)?.[1];
-if (!booth)
-	notes.push('No booth link (/b/…) on the approved revision page: booth view not measured.');
+const booth = linkRow
+	? `/b/${linkRow.token}`
+	: /href="(\/b\/[A-Za-z0-9_-]{16,})"/.exec(revisionPage)?.[1];
+if (!booth) notes.push('No booth link (/b/…) for the approved revision: booth view not measured.');
 
 // ---- load: every route in the same run, bare endpoint first ----
 const checksBody = JSON.stringify({
