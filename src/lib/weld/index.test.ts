@@ -2,6 +2,9 @@ import fc from 'fast-check';
 import { expect, it } from 'vitest';
 import * as weld from './index';
 
+// This file holds no check values: those stand with their sources (ASME, AWS, OSHA, ISO, or
+// "common practice, no source") in each module's own test beside it.
+
 // "No function throws": every exported function, called with arbitrary arguments (numbers
 // including NaN and Infinity, absurd strings, objects, arrays, null, undefined).
 type AnyFunction = (...args: unknown[]) => unknown;
