@@ -3,6 +3,7 @@ import { message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { authSignIn } from '$lib/server/auth/auth-js';
 import { verifyPassword } from '$lib/server/auth/password';
+import { clearFailures, isLockedOut, recordFailure } from '$lib/server/auth/failed-sign-ins';
 import { formLimiter, signInLimiter } from '$lib/server/auth/rate-limit';
 import { User } from '$lib/server/models';
 import { START_PAGE } from '$lib/roles';
@@ -44,13 +45,18 @@ export const actions: Actions = {
 		const form = await superValidate(data, zod4(signInSchema), { id: 'password' });
 		if (!form.valid) return fail(400, { form });
 		form.data.password = '';
-		if (await signInLimiter.isLimited(event, form.data.email)) {
-			return message(form, 'Too many attempts. Wait 15 minutes and try again.', { status: 429 });
+		const TOO_MANY = 'Too many attempts. Wait 15 minutes and try again.';
+		if ((await signInLimiter.isLimited(event)) || isLockedOut(form.data.email)) {
+			return message(form, TOO_MANY, { status: 429 });
 		}
 		const user = await User.findOne({ where: { email: form.data.email } });
 		const password = String(data.get('password') ?? '');
 		const ok = await verifyPassword(password, user?.active ? user.passwordHash : null);
-		if (!user || !ok) return message(form, GENERIC, { status: 400 });
+		if (!user || !ok) {
+			recordFailure(form.data.email);
+			return message(form, isLockedOut(form.data.email) ? TOO_MANY : GENERIC, { status: 400 });
+		}
+		clearFailures(form.data.email);
 		// Auth.js sets the session cookie and throws the redirect to where the member was going.
 		data.set('providerId', 'credentials');
 		data.set(
