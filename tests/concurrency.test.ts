@@ -92,3 +92,54 @@ test('50 parallel one-tap logs by one welder: one continuity entry', async () =>
 		`[concurrency] ${PARALLEL} parallel taps: ${entries} continuity entry, ${audits} logged now`
 	);
 });
+
+test('50 parallel booth taps on one posted sheet: one continuity entry', async () => {
+	const cookie = await cookieOf(welder);
+	const link = await withE2eDatabase((db) =>
+		db.get<{ token: string; process: string }>(
+			`SELECT b.token, p.process FROM booth_links b
+			 JOIN procedures p ON p.id = b.procedure_id
+			 JOIN procedure_revisions r ON r.id = b.revision_id
+			 JOIN shops s ON s.id = b.shop_id
+			 WHERE s.name = 'Larkspur Trailer & Rail' AND b.revoked_at IS NULL AND r.state = 'approved'
+			   AND p.process IN ('GTAW', 'GMAW') ORDER BY b.id LIMIT 1`
+		)
+	);
+	test.skip(!link, 'No live booth link to an approved GTAW or GMAW revision in the demo data');
+	const since = new Date(Date.now() - 1000).toISOString().replace('T', ' ').slice(0, 19);
+	const answers = await Promise.all(
+		Array.from({ length: PARALLEL }, () => postForm(`/b/${link!.token}?/used`, cookie, {}))
+	);
+	const statuses = answers.map((r) => r.status);
+	expect(statuses.filter((s) => s >= 500)).toEqual([]);
+	// The booth's per-address limit may turn some away (429); those log nothing.
+	expect(
+		statuses.filter((s) => s !== 200 && s !== 429),
+		statuses.join(',')
+	).toEqual([]);
+	expect(statuses).toContain(200);
+	const { entries, audits } = await withE2eDatabase(async (db) => {
+		const w = await db.get<{ id: number }>(
+			'SELECT w.id FROM welders w JOIN users u ON u.id = w.user_id WHERE u.email = ?',
+			[welder.email]
+		);
+		const day = await db.get<{ d: string }>(
+			'SELECT max(used_on) AS d FROM continuity_entries WHERE welder_id = ? AND process = ?',
+			[w!.id, link!.process]
+		);
+		const n = await db.get<{ n: number }>(
+			'SELECT count(*) AS n FROM continuity_entries WHERE welder_id = ? AND process = ? AND used_on = ?',
+			[w!.id, link!.process, day!.d]
+		);
+		const a = await db.get<{ n: number }>(
+			"SELECT count(*) AS n FROM audit_events WHERE action = 'continuity.recorded' AND at >= ? AND actor_id = (SELECT id FROM users WHERE email = ?)",
+			[since, welder.email]
+		);
+		return { entries: n!.n, audits: a!.n };
+	});
+	expect(entries).toBe(1);
+	expect(audits).toBeLessThanOrEqual(1);
+	console.log(
+		`[concurrency] ${PARALLEL} parallel booth taps (${link!.process}): ${entries} continuity entry, ${audits} logged now, ${statuses.filter((s) => s === 429).length} turned away by the rate limit`
+	);
+});

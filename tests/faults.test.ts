@@ -1,6 +1,6 @@
 // Faults: the built server under concurrent writes (records, records with photos, sign-offs) is
 // killed with SIGKILL at a random moment, restarted, and checked, round after round. Rounds and
-// seed: FAULT_ROUNDS (default 8), FAULT_SEED (printed, so a failing run can be replayed).
+// seed: FAULT_ROUNDS (default 6), FAULT_SEED (printed, so a failing run can be replayed).
 import { expect, test } from '@playwright/test';
 import { signInCookie } from '../scripts/bench/http';
 import { ownServer, type OwnServer } from './support/own-server';
@@ -14,7 +14,7 @@ import {
 	type WriterContext
 } from './support/writers';
 
-const ROUNDS = Number(process.env.FAULT_ROUNDS ?? 8);
+const ROUNDS = Number(process.env.FAULT_ROUNDS ?? 6);
 const SEED = Number(process.env.FAULT_SEED ?? Date.now() % 100_000);
 
 /** mulberry32: a small seeded generator, so the kill moments can be replayed. */

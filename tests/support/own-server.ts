@@ -60,7 +60,8 @@ export async function ownServer(opts: { dataDir?: string } = {}): Promise<OwnSer
 		BODY_SIZE_LIMIT: '80M',
 		BEADLINE_JOBS: 'off',
 		SIGNIN_LIMIT_IP_PER_MINUTE: '100000',
-		FORM_LIMIT_IP_PER_MINUTE: '100000'
+		FORM_LIMIT_IP_PER_MINUTE: '100000',
+		BOOTH_LIMIT_IP_PER_MINUTE: '100000'
 	};
 	const prep = spawnSync(process.execPath, ['--import', 'tsx', 'tests/support/prepare-data.ts'], {
 		env,
