@@ -56,7 +56,9 @@ stackEnv({ dataDir, port, smtpPort: await freePort() });
 Object.assign(process.env, {
 	BEADLINE_JOBS: 'off',
 	SIGNIN_LIMIT_IP_PER_MINUTE: '100000',
-	FORM_LIMIT_IP_PER_MINUTE: '100000'
+	FORM_LIMIT_IP_PER_MINUTE: '100000',
+	// One address sends every request here: the booth's per-address cap would measure itself.
+	BOOTH_LIMIT_IP_PER_MINUTE: '100000000'
 });
 const origin = `http://localhost:${port}`;
 
@@ -196,12 +198,9 @@ if (!flag('--no-lighthouse')) {
 		origin,
 		[
 			{ name: 'sign-in page', path: '/signin' },
-			...(booth
-				? [
-						{ name: 'booth view (signed out)', path: booth },
-						{ name: 'booth view (welder)', path: booth, cookie: welder }
-					]
-				: [])
+			// Signed out: what a scan shows first (Lighthouse's extra Cookie header did not reach
+			// the page in our runs, so a signed-in audit would only repeat this one).
+			...(booth ? [{ name: 'booth view (signed out)', path: booth }] : [])
 		],
 		await freePort()
 	);

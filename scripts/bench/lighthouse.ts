@@ -19,6 +19,8 @@ export interface PageAudit {
 	/** Page weight: every byte transferred for the page, and how many requests. */
 	totalKb: number;
 	requests: number;
+	/** Lighthouse's own error for the page (e.g. it answered 4xx), when it had one. */
+	error?: string;
 }
 
 const CATEGORIES = ['performance', 'accessibility', 'best-practices'];
@@ -79,7 +81,8 @@ export async function audit(
 				tbtMs: num('total-blocking-time'),
 				cls: Number(Number(lhr.audits['cumulative-layout-shift']?.numericValue ?? 0).toFixed(3)),
 				totalKb: Math.round(num('total-byte-weight') / 102.4) / 10,
-				requests: items?.length ?? 0
+				requests: items?.length ?? 0,
+				...(lhr.runtimeError ? { error: lhr.runtimeError.message } : {})
 			});
 		}
 		return out;

@@ -105,6 +105,7 @@ export function printFigures(f: BenchFigures): void {
 				[a.totalKb, 7],
 				[a.requests, 5]
 			]);
+		for (const a of f.lighthouse.filter((x) => x.error)) console.log(`  ${a.name}: ${a.error}`);
 	}
 	console.log(`\nServer RSS after the run: ${f.rss.afterMb} MB (peak ${f.rss.peakMb} MB)`);
 	for (const n of f.notes) console.log(`Note: ${n}`);
