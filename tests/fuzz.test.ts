@@ -4,7 +4,7 @@
 // no 5xx; a 400 carries field errors; a refused request (4xx) commits nothing to the database
 // (SQLite's data_version, read on a connection of our own, must not move, or else only rows
 // added to the append-only audit trail, as a refused signature is meant to leave).
-// FUZZ_RUNS payloads per route (default 15), FUZZ_SEED to replay (printed).
+// FUZZ_RUNS payloads per route (default 20), FUZZ_SEED to replay (printed).
 import { expect, test } from '@playwright/test';
 import fc from 'fast-check';
 import type { z } from 'zod';
@@ -33,7 +33,7 @@ import { ownServer, type OwnServer } from './support/own-server';
 import { admin, engineer, inspector, welder } from './support/people';
 import { discoverRoutes, fillPath, type AppRoute } from './support/routes';
 
-const RUNS = Number(process.env.FUZZ_RUNS ?? 15);
+const RUNS = Number(process.env.FUZZ_RUNS ?? 20);
 const SEED = Number(process.env.FUZZ_SEED ?? Date.now() % 1_000_000);
 
 /** The zod schema each JSON API validates with (routes not listed get generic hostile JSON). */
