@@ -1,5 +1,5 @@
-import { fail, redirect } from '@sveltejs/kit';
-import { message, superValidate } from 'sveltekit-superforms';
+import { redirect } from '@sveltejs/kit';
+import { fail, message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { formLimiter } from '$lib/server/auth/rate-limit';
 import { createShop } from '$lib/server/people/create-shop';

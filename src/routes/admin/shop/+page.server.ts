@@ -1,5 +1,4 @@
-import { fail } from '@sveltejs/kit';
-import { message, superValidate } from 'sveltekit-superforms';
+import { fail, message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { currentMember } from '$lib/server/auth/current-member';
 import { requireRole } from '$lib/server/auth/guards';

@@ -1,5 +1,4 @@
-import { fail } from '@sveltejs/kit';
-import { message, superValidate } from 'sveltekit-superforms';
+import { fail, message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { createApiToken, listApiTokens, revokeApiToken } from '$lib/server/api/api-tokens';
 import { requireRole } from '$lib/server/auth/guards';

@@ -1,5 +1,5 @@
-import { error, fail, redirect, type RequestEvent } from '@sveltejs/kit';
-import { message, superValidate } from 'sveltekit-superforms';
+import { error, redirect, type RequestEvent } from '@sveltejs/kit';
+import { fail, message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { formLimiter } from '$lib/server/auth/rate-limit';
 import { InviteGoneError } from '$lib/server/people/errors';

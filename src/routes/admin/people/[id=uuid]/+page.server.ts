@@ -1,5 +1,5 @@
-import { error, fail } from '@sveltejs/kit';
-import { message, superValidate } from 'sveltekit-superforms';
+import { error } from '@sveltejs/kit';
+import { fail, message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { requireRole } from '$lib/server/auth/guards';
 import { RefusedError } from '$lib/server/people/errors';
