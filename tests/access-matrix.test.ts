@@ -132,8 +132,7 @@ function verdict(
 		// is the one a missing object gets, so nothing tells that the object exists.
 		if (a.status !== ghost.status || a.status === 200)
 			return `another shop's object answers ${a.status}, a missing one ${ghost.status}`;
-	} else if (!refused(a) && !(a.status === 400 && rule.roleCheckedAfterValidation))
-		return `must be refused, got ${a.status} ${a.location}`;
+	} else if (!refused(a)) return `must be refused, got ${a.status} ${a.location}`;
 	if (who === 'anonymous' && route.pattern.startsWith('/api/') && a.status !== 401)
 		return `signed out on the API must be 401, got ${a.status}`;
 	if (who === 'other' && names && role && allows(rule, role) && refused(a) && a.status !== 404)

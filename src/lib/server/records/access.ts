@@ -17,13 +17,21 @@ export function isFrozen(record: Pick<SettingsRecord, 'frozenAt' | 'citedByProce
 	return record.frozenAt != null || record.citedByProcedureId != null;
 }
 
-/** Author, engineers and admins edit until the record is frozen. */
+/** Author, engineers and admins may edit, freezing aside. */
+export function mayEdit(
+	user: Pick<SessionUser, 'id' | 'role'>,
+	record: Pick<SettingsRecord, 'authorId'>
+): boolean {
+	if (user.role === 'welder') return false;
+	return CREATE_ROLES.includes(user.role) || record.authorId === user.id;
+}
+
+/** ... and only until the record is frozen. */
 export function canEdit(
 	user: Pick<SessionUser, 'id' | 'role'>,
 	record: Pick<SettingsRecord, 'authorId' | 'frozenAt' | 'citedByProcedureId'>
 ): boolean {
-	if (isFrozen(record) || user.role === 'welder') return false;
-	return CREATE_ROLES.includes(user.role) || record.authorId === user.id;
+	return !isFrozen(record) && mayEdit(user, record);
 }
 
 /** The acting member as stored now (role changes and disabling take effect at once). */

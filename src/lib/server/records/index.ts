@@ -6,4 +6,11 @@ export { recordJson } from './json';
 export { authorNames, fillersInUse, listRecords, PAGE_SIZE, plotPoints } from './list';
 export { MAX_PHOTOS, photosFrom } from './photos';
 export { getRecord, recordHistory, type RecordView } from './read';
-export { createRecord, findOwn, freezeRecord, removePhoto, updateRecord } from './save';
+export {
+	createRecord,
+	findOwn,
+	freezeRecord,
+	removePhoto,
+	requireEditable,
+	updateRecord
+} from './save';

@@ -11,7 +11,7 @@ import { write } from '../db';
 import { SettingsPhoto, SettingsRecord } from '../models';
 import { actorRef } from '../people/actor';
 import { ForbiddenError, NotFoundError, RefusedError } from '../people/errors';
-import { canEdit, CREATE_ROLES, currentActor, isFrozen } from './access';
+import { canEdit, CREATE_ROLES, currentActor, isFrozen, mayEdit } from './access';
 import { discardPhotos, storePhotos, type IncomingPhoto, type StoredPhoto } from './photos';
 
 type Columns = Omit<
@@ -142,6 +142,16 @@ export async function findOwn(
 	const r = await SettingsRecord.findOne({ where: { id, shopId: actor.shopId }, transaction: t });
 	if (!r) throw new NotFoundError('No such settings record in your shop.');
 	return r;
+}
+
+/**
+ * Refuses before the form is read when the member may not edit this record at all, so a
+ * refused request gets 403 (not field errors); a frozen record is explained by the save itself.
+ */
+export async function requireEditable(actor: SessionUser, id: number): Promise<void> {
+	const record = await findOwn(actor, id);
+	if (!mayEdit(actor, record))
+		throw new ForbiddenError('Your role does not allow editing this record.');
 }
 
 export async function updateRecord(

@@ -1,8 +1,15 @@
-import { error, fail, redirect } from '@sveltejs/kit';
-import { superValidate } from 'sveltekit-superforms';
+import { error, redirect } from '@sveltejs/kit';
+import { fail, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { requireRole } from '$lib/server/auth/guards';
-import { getRecord, photosFrom, removePhoto, updateRecord, VIEW_ROLES } from '$lib/server/records';
+import {
+	getRecord,
+	photosFrom,
+	removePhoto,
+	requireEditable,
+	updateRecord,
+	VIEW_ROLES
+} from '$lib/server/records';
 import {
 	refuseRecordForm,
 	rethrowAsHttp,
@@ -34,6 +41,7 @@ export const actions: Actions = {
 	save: async (event) => {
 		const user = requireRole(event, ...VIEW_ROLES);
 		const id = Number(event.params.id);
+		await requireEditable(user, id).catch(rethrowAsHttp);
 		const data = await event.request.formData();
 		const form = await superValidate<SettingsRecordForm, RecordMessage>(data, adapter, {
 			id: 'record'
@@ -49,6 +57,7 @@ export const actions: Actions = {
 	removePhoto: async (event) => {
 		const user = requireRole(event, ...VIEW_ROLES);
 		const id = Number(event.params.id);
+		await requireEditable(user, id).catch(rethrowAsHttp);
 		const photo = Number((await event.request.formData()).get('photo'));
 		if (!Number.isSafeInteger(photo) || photo < 1)
 			return fail(400, { photoError: 'Unknown photo.' });
