@@ -14,8 +14,8 @@ export interface ShadeAdvice {
 	minimum: number;
 	/** ANSI Z49.1 / AWS F2.2 suggested comfort shade; null where the guide gives none. */
 	suggested: number | null;
-	/** The highest current the shade was read for. */
-	atAmps: number;
+	/** The highest current the shade was read for; absent when read for one current. */
+	atAmps?: number;
 }
 
 export const SAFE_PRACTICE = 'Safe practice in full: ANSI Z49.1 and OSHA 29 CFR 1910 Subpart Q.';
@@ -45,14 +45,15 @@ export function shadeForRange(
 const thoriated = (tungsten: string | null | undefined) => /^\s*(E?WT|EWTh)/i.test(tungsten ?? '');
 
 export function cautionsFor(job: {
-	process: Process;
+	/** Unknown process: every gas caution shows. */
+	process?: Process | null;
 	family?: string | null;
 	tungsten?: string | null;
 	shade?: ShadeAdvice | null;
 }): Caution[] {
 	const s = job.shade;
 	const shadeText = s
-		? `lens shade at least ${s.minimum}${s.suggested ? ` (suggested ${s.suggested})` : ''} up to ${s.atAmps} A (OSHA 29 CFR 1910.133(a)(5); ANSI Z49.1 / AWS F2.2).`
+		? `lens shade at least ${s.minimum}${s.suggested ? ` (suggested ${s.suggested})` : ''} ${s.atAmps ? `up to ${s.atAmps} A` : 'for this current'} (OSHA 29 CFR 1910.133(a)(5); ANSI Z49.1 / AWS F2.2).`
 		: 'use the lens shade for the current (OSHA 29 CFR 1910.133(a)(5)).';
 	const out: Caution[] = [
 		{
