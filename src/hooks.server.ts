@@ -31,9 +31,15 @@ const securityHeaders: Handle = async ({ event, resolve }) => {
 	return response;
 };
 
+/** The four Latin faces are in every page's first paint; loading them late shifts the layout. */
+const FIRST_PAINT_FONTS = /atkinson-hyperlegible-(next|mono)-latin-(400|700)-normal\./;
+
 const member: Handle = async ({ event, resolve }) => {
 	event.locals.user = await currentMember(event);
-	const response = await resolve(event);
+	const response = await resolve(event, {
+		preload: ({ type, path }) =>
+			type === 'js' || type === 'css' || (type === 'font' && FIRST_PAINT_FONTS.test(path))
+	});
 	// A signed-in page must never come back from a shared cache or the back button of another person.
 	if (event.locals.user && !response.headers.has('Cache-Control')) {
 		response.headers.set('Cache-Control', 'private, no-store');
