@@ -16,16 +16,17 @@ import {
 import type { Source } from '$reference/types';
 import type { RevisionVariables } from '$lib/schemas/procedure';
 import { CODE_LABELS } from './options';
+import {
+	type ProcedureOnlyCheckId,
+	PRODUCT,
+	QW_401,
+	QW_404_4,
+	QW_409_4,
+	QW_424
+} from './check-catalogue';
 import { lengthMm, type PqrQualified } from './pqr-values';
 
-export type ProcedureCheckId =
-	| CheckId
-	| 'pqr-support'
-	| 'pqr-process'
-	| 'pqr-current-type'
-	| 'pqr-p-number'
-	| 'pqr-f-number'
-	| 'pqr-positions';
+export type ProcedureCheckId = CheckId | ProcedureOnlyCheckId;
 
 export interface ProcedureFinding extends Omit<Finding, 'check'> {
 	check: ProcedureCheckId;
@@ -36,33 +37,6 @@ export interface ProcedureFinding extends Omit<Finding, 'check'> {
 	/** The PQR compared against. */
 	pqr?: string;
 }
-
-// Paragraphs the weld core's sources do not carry; recalled, so marked so.
-const QW_424: Source = {
-	label: 'ASME IX QW-424 (base metals qualified by P-Number)',
-	edition: 'BPVC IX, recalled',
-	kind: 'from memory'
-};
-const QW_404_4: Source = {
-	label: 'ASME IX QW-404.4 (F-Number is an essential variable)',
-	edition: 'BPVC IX, recalled',
-	kind: 'from memory'
-};
-const QW_401: Source = {
-	label: 'ASME IX QW-401 / AWS D1.1 Table 4.5 (process change needs a new PQR)',
-	edition: 'recalled',
-	kind: 'from memory'
-};
-const QW_409_4: Source = {
-	label: 'ASME IX QW-409.4 (current type and polarity)',
-	edition: 'BPVC IX, recalled',
-	kind: 'from memory'
-};
-const PRODUCT: Source = {
-	label: 'Beadline: a procedure under a code is supported by a PQR',
-	edition: 'product rule',
-	kind: 'common practice'
-};
 
 const AT: Record<string, string> = {
 	amps: 'amps',

@@ -1,0 +1,107 @@
+// The checks a revision gets beyond the weld core's: its ranges against what the supporting PQRs
+// qualify. Listed with the weld core's catalogue on the help page; sources kept here because
+// the weld core's tables do not carry these paragraphs.
+import { sourceOf, type FindingSource } from '$lib/weld';
+import * as S from '$reference/sources';
+import type { Source } from '$reference/types';
+
+// Recalled, so marked so.
+export const QW_424: Source = {
+	label: 'ASME IX QW-424 (base metals qualified by P-Number)',
+	edition: 'BPVC IX, recalled',
+	kind: 'from memory'
+};
+export const QW_404_4: Source = {
+	label: 'ASME IX QW-404.4 (F-Number is an essential variable)',
+	edition: 'BPVC IX, recalled',
+	kind: 'from memory'
+};
+export const QW_401: Source = {
+	label: 'ASME IX QW-401 / AWS D1.1 Table 4.5 (process change needs a new PQR)',
+	edition: 'recalled',
+	kind: 'from memory'
+};
+export const QW_409_4: Source = {
+	label: 'ASME IX QW-409.4 (current type and polarity)',
+	edition: 'BPVC IX, recalled',
+	kind: 'from memory'
+};
+export const PRODUCT: Source = {
+	label: 'Beadline: a procedure under a code is supported by a PQR',
+	edition: 'product rule',
+	kind: 'common practice'
+};
+
+/** For the help page's list of sources. */
+export const PROCEDURE_SOURCES: readonly Source[] = [QW_424, QW_404_4, QW_401, QW_409_4, PRODUCT];
+
+export const PROCEDURE_ONLY_CHECK_IDS = [
+	'pqr-support',
+	'pqr-process',
+	'pqr-current-type',
+	'pqr-p-number',
+	'pqr-f-number',
+	'pqr-positions'
+] as const;
+
+export type ProcedureOnlyCheckId = (typeof PROCEDURE_ONLY_CHECK_IDS)[number];
+
+export interface ProcedureCatalogueEntry {
+	id: ProcedureOnlyCheckId;
+	on: 'procedure';
+	title: string;
+	compares: string;
+	sources: FindingSource[];
+}
+
+const e = (
+	id: ProcedureOnlyCheckId,
+	title: string,
+	compares: string,
+	sources: Source[]
+): ProcedureCatalogueEntry => ({
+	id,
+	on: 'procedure',
+	title,
+	compares,
+	sources: sources.map(sourceOf)
+});
+
+export const PROCEDURE_CHECK_CATALOGUE: readonly ProcedureCatalogueEntry[] = [
+	e(
+		'pqr-support',
+		'Supported by a PQR',
+		'A revision that claims a code and cites no PQR cannot have its ranges checked against a qualification.',
+		[PRODUCT]
+	),
+	e(
+		'pqr-process',
+		'Same process as the PQR',
+		'Each cited PQR was welded with the procedure’s process; another process needs its own PQR.',
+		[QW_401]
+	),
+	e(
+		'pqr-current-type',
+		'Current type the PQR qualifies',
+		'The procedure’s current type and polarity against the ones its PQRs were welded with.',
+		[QW_409_4]
+	),
+	e(
+		'pqr-p-number',
+		'Base metals by P-Number',
+		'Every P-Number the procedure lists against the P-Numbers its PQRs qualify.',
+		[QW_424]
+	),
+	e(
+		'pqr-f-number',
+		'Filler by F-Number',
+		'Every F-Number the procedure lists against the F-Numbers its PQRs were welded with.',
+		[QW_404_4]
+	),
+	e(
+		'pqr-positions',
+		'Positions the PQRs cover',
+		'Every production position against the test positions of the PQRs, by the position rules of QW-461.9 applied as the shop’s rule.',
+		[S.ASME_IX_QW_461_9]
+	)
+];
