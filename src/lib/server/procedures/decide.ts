@@ -8,6 +8,7 @@ import { Op, type Transaction } from 'sequelize';
 import { ROLE_LABELS } from '$lib/roles';
 import { audit } from '../audit';
 import { issueBoothLink } from '../booth/links';
+import { clearFailures, isLockedOut, recordFailure } from '../auth/failed-sign-ins';
 import { verifyPassword } from '../auth/password';
 import type { SessionUser } from '../auth/session-user';
 import { write } from '../db';
@@ -19,6 +20,8 @@ import { findProcedure, findRevision, readVariables, syncHead } from './find';
 import { notifyDecision } from './notify';
 
 export const WRONG_PASSWORD = 'That password is not right. Nothing was signed.';
+export const TOO_MANY_PASSWORDS =
+	'Too many wrong passwords for this account. Wait 15 minutes and try again; nothing was signed.';
 export const OWN_WORK =
 	'You wrote or submitted this revision, so someone else must decide on it. Nothing was signed.';
 
@@ -178,9 +181,13 @@ export async function approveRevision(
 ): Promise<{ signOffId: number; digest: string; mailed: boolean }> {
 	if (!REVIEW_ROLES.includes(actor.role))
 		throw new ForbiddenError('Only an inspector can approve a revision.');
+	// Wrong passwords here count with those at sign-in: a borrowed session must not become a
+	// way to guess the account's password.
+	if (isLockedOut(actor.email)) throw new RefusedError(TOO_MANY_PASSWORDS, 'password');
 	// The password is checked before the write lock is taken (bcrypt is slow on purpose).
 	const me = await User.findOne({ where: { id: actor.id, shopId: actor.shopId, active: true } });
 	if (!(await verifyPassword(input.password, me?.passwordHash))) {
+		recordFailure(actor.email);
 		const revision = await findRevision(actor, procedureId, rev);
 		await write((t) =>
 			audit(
@@ -196,8 +203,12 @@ export async function approveRevision(
 				t
 			)
 		);
-		throw new RefusedError(WRONG_PASSWORD, 'password');
+		throw new RefusedError(
+			isLockedOut(actor.email) ? TOO_MANY_PASSWORDS : WRONG_PASSWORD,
+			'password'
+		);
 	}
+	clearFailures(actor.email);
 	const d: Decision = { meaning: 'approved', comment: input.comment.trim() || null };
 	const r = await decide(actor, procedureId, rev, d, event);
 	const mailed = opts.notify === false ? true : await mailAuthor(actor, procedureId, rev, r, d);

@@ -8,7 +8,13 @@ import { readVariables } from './find';
 export * from './access';
 export { createProcedure } from './create';
 export { notDraftMessage, saveDraft, updateDraft } from './edit';
-export { approveRevision, OWN_WORK, returnRevision, WRONG_PASSWORD } from './decide';
+export {
+	approveRevision,
+	OWN_WORK,
+	returnRevision,
+	TOO_MANY_PASSWORDS,
+	WRONG_PASSWORD
+} from './decide';
 export { checkIntegrity, revisionContent, type Integrity } from './digest';
 export { findProcedure, findRevision, readVariables } from './find';
 export { linksOf } from './links';

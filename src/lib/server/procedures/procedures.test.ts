@@ -16,6 +16,7 @@ const { createRecord } = await import('../records/save');
 const { certifyPqr, createPqr } = await import('../pqrs');
 const svc = await import('./index');
 const T = await import('./test-support');
+const { clearFailures } = await import('../auth/failed-sign-ins');
 
 type People = Awaited<ReturnType<typeof T.shopWithPeople>>;
 let a: People, b: People;
@@ -208,6 +209,24 @@ describe('signing', () => {
 				where: { objectId: String(rev!.id), action: 'procedure_revision.signature_refused' }
 			})
 		).toBe(1);
+	});
+
+	it('stops taking passwords after ten wrong ones, even the right one, and signs nothing', async () => {
+		const id = await inReview();
+		const wrong = () =>
+			svc.approveRevision(a.inspector, id, 1, { password: 'not it', comment: '' }, null, quiet);
+		clearFailures(a.inspector.email);
+		try {
+			for (let i = 0; i < 9; i++) await expect(wrong()).rejects.toThrow(svc.WRONG_PASSWORD);
+			// The tenth is the last one the limit takes (the same ten as at sign-in).
+			await expect(wrong()).rejects.toThrow(svc.TOO_MANY_PASSWORDS);
+			await expect(
+				svc.approveRevision(a.inspector, id, 1, { password: T.PASSWORD, comment: '' }, null, quiet)
+			).rejects.toThrow(svc.TOO_MANY_PASSWORDS);
+			expect(await state(id, 1)).toBe('in-review');
+		} finally {
+			clearFailures(a.inspector.email);
+		}
 	});
 
 	it('lets neither a welder nor an engineer approve, nor an author given inspector rights by mistake', async () => {
