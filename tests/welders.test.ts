@@ -106,6 +106,18 @@ test('a welder qualified 3G GTAW, kept current by a tap, checked by the card QR,
 	await expect(row.getByTestId('status')).toHaveAttribute('data-state', 'current');
 	await expect(visitor.getByTestId('ranges')).toHaveCount(0);
 
+	// The qualification is withdrawn (a failed retest): the scanned card says so at once.
+	await adminPage.reload();
+	await adminPage.getByText('Withdraw this qualification').click();
+	await adminPage
+		.getByLabel('Why is the GTAW ASME IX qualification withdrawn?')
+		.fill('Failed the bend retest.');
+	await adminPage.getByTestId('withdraw-qualification').click();
+	await expect(qual.getByTestId('status')).toHaveAttribute('data-state', 'withdrawn');
+	await expect(adminPage.getByTestId('withdraw-qualification')).toHaveCount(0);
+	await visitor.reload();
+	await expect(row.getByTestId('status')).toHaveAttribute('data-state', 'withdrawn');
+
 	// Revoked: the printed card's link now says withdrawn.
 	await adminPage.reload();
 	await adminPage.getByTestId('revoke-link').click();

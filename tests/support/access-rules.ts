@@ -158,6 +158,7 @@ export const ACCESS_RULES: Record<string, Access> = {
 	'POST /welders/[id=id]?/addUse': roles(MANAGE),
 	'POST /welders/[id=id]?/confirm': roles(MANAGE),
 	'POST /welders/[id=id]?/revokeLink': roles(MANAGE),
+	'POST /welders/[id=id]?/withdraw': roles(MANAGE),
 	'POST /welders/[id=id]/edit': roles(MANAGE),
 	'POST /welders/[id=id]/qualifications/new': roles(MANAGE),
 	'POST /welders/me?/tap': members,

@@ -39,6 +39,10 @@ export function actionNames(source: string): string[] {
 			i = source.indexOf('\n', i);
 			continue;
 		}
+		if (c === '/' && source[i + 1] === '*') {
+			i = source.indexOf('*/', i) + 1;
+			continue;
+		}
 		if (c === '{' || c === '(' || c === '[') depth++;
 		else if (c === '}' || c === ')' || c === ']') {
 			if (depth === 1 && token.trim()) names.push(token.trim()); // shorthand `{ save }`

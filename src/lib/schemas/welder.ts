@@ -157,6 +157,17 @@ export const confirmationSchema = z.object({
 	note: text(500)
 });
 
+/** Withdrawing a qualification (a failed retest, a misconduct finding, a record in error). */
+export const withdrawQualificationSchema = z.object({
+	qualificationId: z.coerce.number().int().positive('Pick a qualification.'),
+	reason: z
+		.string('Say why the qualification is withdrawn.')
+		.trim()
+		.min(3, 'Say why the qualification is withdrawn.')
+		.max(500, 'Keep the reason under 500 characters.')
+});
+export type WithdrawQualificationInput = z.output<typeof withdrawQualificationSchema>;
+
 /** The welder's own one-tap log: only the process; the date is the server's today. */
 export const tapSchema = z.object({ process: z.enum(WELD_PROCESSES, 'Unknown process.') });
 

@@ -1,14 +1,14 @@
 // Recording a welder's qualification test. The ranges are not stored: they are computed from
 // these facts by the weld core whenever shown, so a corrected table corrects every page.
 import type { RequestEvent } from '@sveltejs/kit';
-import type { QualificationInput } from '$lib/schemas/welder';
+import type { QualificationInput, WithdrawQualificationInput } from '$lib/schemas/welder';
 import { parseFiller } from '$lib/weld/filler';
 import { parseLength } from '$lib/weld/units';
 import { audit } from '../audit';
 import type { SessionUser } from '../auth/session-user';
 import { write } from '../db';
 import { Qualification } from '../models';
-import { RefusedError } from '../people/errors';
+import { NotFoundError, RefusedError } from '../people/errors';
 import { discardUploads, saveUpload, UploadRefused } from '../storage';
 import { actingMember, MANAGE_ROLES } from './access';
 import { findWelder } from './welders';
@@ -122,4 +122,44 @@ export async function qualificationRecord(shopId: number, welderId: number, id: 
 	const q = await Qualification.findOne({ where: { id, welderId, shopId } });
 	if (!q?.recordKey) return null;
 	return { key: q.recordKey, name: q.recordName ?? 'test-record.pdf' };
+}
+
+/**
+ * Withdraws a qualification for good: it stops covering any work and shows as withdrawn, its
+ * history kept. The reason goes to the audit trail; a welder who requalifies gets a new record.
+ */
+export async function withdrawQualification(
+	actor: SessionUser,
+	welderId: number,
+	input: WithdrawQualificationInput,
+	event: RequestEvent | null = null
+): Promise<void> {
+	await write(async (t) => {
+		const me = await actingMember(actor, MANAGE_ROLES, t);
+		const q = await Qualification.findOne({
+			where: { id: input.qualificationId, welderId, shopId: actor.shopId },
+			transaction: t
+		});
+		if (!q) throw new NotFoundError('No such qualification for this welder.');
+		if (q.withdrawnAt)
+			throw new RefusedError(
+				`Already withdrawn on ${q.withdrawnAt.toISOString().slice(0, 10)}.`,
+				'qualificationId'
+			);
+		const at = new Date();
+		await q.update({ withdrawnAt: at }, { transaction: t });
+		await audit(
+			{
+				shopId: actor.shopId,
+				actor: me,
+				action: 'qualification.withdrawn',
+				objectType: 'qualification',
+				objectId: q.id,
+				before: { withdrawnAt: null },
+				after: { withdrawnAt: at.toISOString(), reason: input.reason }
+			},
+			event,
+			t
+		);
+	});
 }

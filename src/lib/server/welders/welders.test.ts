@@ -10,7 +10,8 @@ process.env.UPLOADS_DIR = join(dir, 'uploads');
 const { newShop, addMember } = await import('../people/test-support');
 const { qualificationSchema } = await import('$lib/schemas/welder');
 const { createWelder, updateWelder } = await import('./welders');
-const { addQualification } = await import('./qualifications');
+const { addQualification, withdrawQualification } = await import('./qualifications');
+const { AuditEvent } = await import('../models');
 const { recordContinuity, recordConfirmation } = await import('./continuity');
 const { welderView } = await import('./read');
 const { overviewRows, overviewCsv } = await import('./overview');
@@ -250,6 +251,36 @@ describe('qualifications and continuity', () => {
 				note: ''
 			})
 		).rejects.toMatchObject({ field: 'qualificationId' });
+	});
+});
+
+describe('withdrawing a qualification', () => {
+	it('shows it withdrawn, audits the reason, refuses twice, welders and other shops', async () => {
+		const w = await createWelder(engineer, {
+			name: 'H',
+			stamp: 'S-WD1',
+			email: '',
+			userId: '',
+			active: true
+		});
+		const { id } = await addQualification(engineer, w.id, qual(), null);
+		const input = { qualificationId: id, reason: 'Failed the bend retest.' };
+		await expect(withdrawQualification(welderUser, w.id, input)).rejects.toMatchObject({
+			name: 'ForbiddenError'
+		});
+		await expect(withdrawQualification(other.admin, w.id, input)).rejects.toMatchObject({
+			name: 'NotFoundError'
+		});
+		await withdrawQualification(engineer, w.id, input);
+		const q = (await welderView(shop.shopId, w.id, today)).qualifications[0]!;
+		expect(q.status.state).toBe('withdrawn');
+		const trail = await AuditEvent.findOne({
+			where: { action: 'qualification.withdrawn', objectId: String(id) }
+		});
+		expect(JSON.parse(String(trail!.after))).toMatchObject({ reason: 'Failed the bend retest.' });
+		await expect(withdrawQualification(engineer, w.id, input)).rejects.toMatchObject({
+			field: 'qualificationId'
+		});
 	});
 });
 

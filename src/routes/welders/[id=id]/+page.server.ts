@@ -1,5 +1,5 @@
-import { fail } from '@sveltejs/kit';
-import { message, superValidate } from 'sveltekit-superforms';
+import { fail, message, superValidate } from 'sveltekit-superforms';
+import { RefusedError } from '$lib/server/people/errors';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { requireRole } from '$lib/server/auth/guards';
 import { refuseForm, rethrowAsHttp } from '$lib/server/people/form-errors';
@@ -8,7 +8,12 @@ import { recordConfirmation, recordContinuity } from '$lib/server/welders/contin
 import { localDay } from '$lib/server/welders/dates';
 import { welderView } from '$lib/server/welders/read';
 import { linkState, revokeLinks } from '$lib/server/welders/verification';
-import { confirmationSchema, continuitySchema } from '$lib/schemas/welder';
+import { withdrawQualification } from '$lib/server/welders/qualifications';
+import {
+	confirmationSchema,
+	continuitySchema,
+	withdrawQualificationSchema
+} from '$lib/schemas/welder';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async (event) => {
@@ -79,5 +84,24 @@ export const actions: Actions = {
 				? 'Withdrawn: every card printed so far now reads "withdrawn". The next card gets a new code.'
 				: 'There was no live card link to withdraw.'
 		};
+	},
+	// One small form beside each qualification, so a plain post: its error names the qualification.
+	withdraw: async (event) => {
+		const user = requireRole(event, ...MANAGE_ROLES);
+		const posted = Object.fromEntries(await event.request.formData());
+		const parsed = withdrawQualificationSchema.safeParse(posted);
+		const qualificationId = Number(posted.qualificationId) || null;
+		const reason = typeof posted.reason === 'string' ? posted.reason.slice(0, 500) : '';
+		if (!parsed.success)
+			return fail(400, {
+				withdraw: { qualificationId, reason, error: parsed.error.issues[0]!.message }
+			});
+		try {
+			await withdrawQualification(user, Number(event.params.id), parsed.data, event);
+		} catch (e) {
+			if (!(e instanceof RefusedError)) rethrowAsHttp(e);
+			return fail(400, { withdraw: { qualificationId, reason, error: e.message } });
+		}
+		return { withdrawn: qualificationId };
 	}
 };
