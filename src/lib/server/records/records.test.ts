@@ -124,6 +124,26 @@ describe('settings records', () => {
 		expect(await SettingsRecord.count()).toBe(before);
 	});
 
+	it('walking the date index in order gives the same page as sorting the matches', async () => {
+		for (const q of ['process=GMAW&tmin=1/8&tmax=1/4', 'process=GTAW&dir=asc', 'sort=created']) {
+			const f = readFilters(new URLSearchParams(q));
+			const walked = await svc.listRecords(engineer, f, { strategy: 'walk' });
+			const sorted = await svc.listRecords(engineer, f, { strategy: 'sort' });
+			expect(walked.rows.map((r) => r.id)).toEqual(sorted.rows.map((r) => r.id));
+		}
+	});
+
+	it('walks only when sorted by date and the matches are many (common practice, no source)', () => {
+		expect(svc.walkInOrder('weldedOn', 30_000, 100_000, 25)).toBe(true);
+		expect(svc.walkInOrder('created', 30_000, 100_000, 25)).toBe(true);
+		expect(svc.walkInOrder('amps', 30_000, 100_000, 25)).toBe(false); // amps follow the filters
+		expect(svc.walkInOrder('weldedOn', 500, 100_000, 25)).toBe(false); // few: sort them
+		expect(svc.walkInOrder('weldedOn', 2_000, 100_000, 25)).toBe(true); // 1,250 reads < 2,000
+		expect(svc.walkInOrder('weldedOn', 1_500, 100_000, 25)).toBe(false); // 1,667 > 1,500
+		expect(svc.walkInOrder('weldedOn', 30_000, 100_000, 10_000)).toBe(false); // deep page
+		expect(svc.walkInOrder('weldedOn', 100_000, 100_000, 25)).toBe(false); // no filter
+	});
+
 	it('filters, sorts, pages, exports and compares within the shop only', async () => {
 		await svc.createRecord(
 			engineer,

@@ -5,6 +5,7 @@ import * as settingsRecords from './0003-settings-records';
 import * as procedures from './0004-procedures';
 import * as welders from './0005-welders';
 import * as boothLinks from './0006-booth-links';
+import * as recordsFilterIndex from './0007-records-filter-index';
 
 export interface Migration {
 	name: string;
@@ -20,5 +21,6 @@ export const migrations: Migration[] = [
 	{ name: '0003-settings-records', ...settingsRecords },
 	{ name: '0004-procedures', ...procedures },
 	{ name: '0005-welders', ...welders },
-	{ name: '0006-booth-links', ...boothLinks }
+	{ name: '0006-booth-links', ...boothLinks },
+	{ name: '0007-records-filter-index', ...recordsFilterIndex }
 ];
