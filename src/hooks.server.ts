@@ -31,8 +31,9 @@ const securityHeaders: Handle = async ({ event, resolve }) => {
 	return response;
 };
 
-/** The four Latin faces are in every page's first paint; loading them late shifts the layout. */
-const FIRST_PAINT_FONTS = /atkinson-hyperlegible-(next|mono)-latin-(400|700)-normal\./;
+/** The four Latin faces (WOFF2 only) are in every first paint; loading them late shifts the layout. */
+const FIRST_PAINT_FONTS =
+	/atkinson-hyperlegible-(next|mono)-latin-(400|700)-normal\.[\w-]+\.woff2$/;
 
 const member: Handle = async ({ event, resolve }) => {
 	event.locals.user = await currentMember(event);
