@@ -49,6 +49,26 @@ async function target(actor: SessionUser, userId: string, t: Transaction): Promi
 	return u;
 }
 
+type MemberChange = Partial<Pick<User, 'role' | 'active' | 'sessionVersion'>>;
+
+/** Applies a change to a member and records it, before and after, in the same transaction. */
+async function changeMember(
+	u: User,
+	actor: { id: string; name: string },
+	action: string,
+	before: MemberChange,
+	after: MemberChange,
+	event: RequestEvent | null,
+	t: Transaction
+): Promise<void> {
+	await User.update(after, { where: { id: u.id, shopId: u.shopId }, transaction: t });
+	await audit(
+		{ shopId: u.shopId, actor, action, objectType: 'user', objectId: u.id, before, after },
+		event,
+		t
+	);
+}
+
 /** A shop always keeps one active admin, or nobody could invite, assign roles or recover. */
 async function refuseIfLastAdmin(u: User, t: Transaction): Promise<void> {
 	if (u.role !== 'admin' || !u.active) return;
@@ -75,21 +95,7 @@ export async function changeRole(
 		if (u.role === 'admin') await refuseIfLastAdmin(u, t);
 		if (u.id === me.id)
 			throw new RefusedError('You cannot change your own role. Ask another admin.', 'role');
-		const before = { role: u.role };
-		await User.update({ role }, { where: { id: u.id, shopId: actor.shopId }, transaction: t });
-		await audit(
-			{
-				shopId: actor.shopId,
-				actor: actorRef(me),
-				action: 'user.role_changed',
-				objectType: 'user',
-				objectId: u.id,
-				before,
-				after: { role }
-			},
-			event,
-			t
-		);
+		await changeMember(u, actorRef(me), 'user.role_changed', { role: u.role }, { role }, event, t);
 		return person(await u.reload({ transaction: t }));
 	});
 }
@@ -106,19 +112,12 @@ export async function disableMember(
 		if (!u.active) return person(u);
 		await refuseIfLastAdmin(u, t);
 		if (u.id === me.id) throw new RefusedError('You cannot disable yourself. Ask another admin.');
-		const before = { active: true, sessionVersion: u.sessionVersion };
-		const after = { active: false, sessionVersion: u.sessionVersion + 1 };
-		await User.update(after, { where: { id: u.id, shopId: actor.shopId }, transaction: t });
-		await audit(
-			{
-				shopId: actor.shopId,
-				actor: actorRef(me),
-				action: 'user.disabled',
-				objectType: 'user',
-				objectId: u.id,
-				before,
-				after
-			},
+		await changeMember(
+			u,
+			actorRef(me),
+			'user.disabled',
+			{ active: true, sessionVersion: u.sessionVersion },
+			{ active: false, sessionVersion: u.sessionVersion + 1 },
 			event,
 			t
 		);
@@ -135,20 +134,12 @@ export async function enableMember(
 		const me = await requireActiveAdmin(actor, t);
 		const u = await target(actor, userId, t);
 		if (u.active) return person(u);
-		await User.update(
+		await changeMember(
+			u,
+			actorRef(me),
+			'user.enabled',
+			{ active: false },
 			{ active: true },
-			{ where: { id: u.id, shopId: actor.shopId }, transaction: t }
-		);
-		await audit(
-			{
-				shopId: actor.shopId,
-				actor: actorRef(me),
-				action: 'user.enabled',
-				objectType: 'user',
-				objectId: u.id,
-				before: { active: false },
-				after: { active: true }
-			},
 			event,
 			t
 		);
@@ -176,19 +167,12 @@ export async function bumpSessionVersion(
 	event: RequestEvent | null,
 	t: Transaction
 ): Promise<void> {
-	const before = { sessionVersion: u.sessionVersion };
-	const after = { sessionVersion: u.sessionVersion + 1 };
-	await User.update(after, { where: { id: u.id, shopId: u.shopId }, transaction: t });
-	await audit(
-		{
-			shopId: u.shopId,
-			actor,
-			action: 'user.signed_out_everywhere',
-			objectType: 'user',
-			objectId: u.id,
-			before,
-			after
-		},
+	await changeMember(
+		u,
+		actor,
+		'user.signed_out_everywhere',
+		{ sessionVersion: u.sessionVersion },
+		{ sessionVersion: u.sessionVersion + 1 },
 		event,
 		t
 	);
