@@ -129,7 +129,7 @@ export const CHECK_CATALOGUE: readonly CatalogueEntry[] = [
 		'filler-vs-base-metal',
 		'settings',
 		'Filler for the base metal',
-		'The filler family against the base metal family (carbon steel, stainless, aluminium).',
+		'The filler family against the base metal family (carbon steel, stainless, aluminium); the wrong family is a caution.',
 		[S.AWS_A5_CLASSIFICATION]
 	),
 	e(

@@ -5,6 +5,7 @@ import {
 	checkFillerVsBaseMetal,
 	fillerSuits,
 	parseFiller,
+	wrongFamily,
 	type Filler
 } from './filler';
 
@@ -129,8 +130,12 @@ describe('other specifications', () => {
 describe('filler against base metal family', () => {
 	it('matches and mismatches', () => {
 		expect(fillerSuits(get('ER70S-6'), 'carbon-steel')).toBe('ok');
-		expect(fillerSuits(get('ER70S-6'), 'stainless')).toBe('outside');
-		expect(fillerSuits(get('ER4043'), 'carbon-steel')).toBe('outside');
+		// Issue 3 §4: a family mismatch is a caution (findings advise); common practice, no source
+		expect(fillerSuits(get('ER70S-6'), 'stainless')).toBe('caution'); // AWS A5.18: carbon steel wire
+		expect(fillerSuits(get('ER4043'), 'carbon-steel')).toBe('caution'); // AWS A5.10: aluminium rod
+		expect(wrongFamily(get('ER70S-6'), 'stainless')).toBe(true); // AWS A5.18: carbon steel wire
+		expect(wrongFamily(get('ER4043'), 'carbon-steel')).toBe(true); // AWS A5.10: aluminium rod
+		expect(wrongFamily(get('ER309L'), 'carbon-steel')).toBe(false); // AWS A5.9: dissimilar-joint wire
 		expect(fillerSuits(get('ER308L'), 'stainless')).toBe('ok');
 		expect(fillerSuits(get('ER309L'), 'carbon-steel')).toBe('caution'); // dissimilar-joint wire
 		expect(fillerSuits(get('ER80S-D2'), 'carbon-steel')).toBe('caution');
@@ -142,7 +147,11 @@ describe('filler against base metal family', () => {
 			filler: get('ER4043'),
 			family: 'stainless'
 		});
-		expect(f).toMatchObject({ status: 'outside', field: 'filler.classification' });
+		// AWS A5.10: ER4043 is aluminium rod; a mismatch is a caution that names the wrong family
+		expect(f).toMatchObject({ status: 'caution', field: 'filler.classification' });
+		expect(f?.message).toBe(
+			'Wrong filler family: ER4043 is an aluminium filler and does not suit stainless.'
+		);
 		const c = checkFillerClassification({
 			s: { process: 'GTAW', filler: { classification: 'ER70S-6' } },
 			system: 'imperial'

@@ -239,16 +239,22 @@ export function parseFiller(text: unknown): FillerResult {
 	};
 }
 
-/** Whether a filler suits a base metal family: 'ok', 'caution' (unusual but used) or 'outside'. */
-export function fillerSuits(filler: Filler, base: MetalFamily): 'ok' | 'caution' | 'outside' {
-	if (!filler || !Array.isArray(filler.suits)) return 'outside';
-	if (filler.suits.includes(base)) {
-		// ER309L on carbon steel is for joining it to stainless; alone it is an odd choice.
-		if (filler.family !== base && filler.family === 'stainless') return 'caution';
-		if (filler.family === 'low-alloy' && base === 'carbon-steel') return 'caution';
-		return 'ok';
-	}
-	return 'outside';
+/**
+ * Whether a filler suits a base metal family: 'ok', or 'caution' both for an unusual but used
+ * pairing and for the wrong family (issue 3 §4: findings advise, a mismatch is a caution whose
+ * message says plainly it is the wrong family). `wrongFamily` tells the two cautions apart.
+ */
+export function fillerSuits(filler: Filler, base: MetalFamily): 'ok' | 'caution' {
+	if (wrongFamily(filler, base)) return 'caution';
+	// ER309L on carbon steel is for joining it to stainless; alone it is an odd choice.
+	if (filler.family !== base && filler.family === 'stainless') return 'caution';
+	if (filler.family === 'low-alloy' && base === 'carbon-steel') return 'caution';
+	return 'ok';
+}
+
+/** True when the filler is not made for that base metal family at all. */
+export function wrongFamily(filler: Filler, base: MetalFamily): boolean {
+	return !filler || !Array.isArray(filler.suits) || !filler.suits.includes(base);
 }
 
 const FAMILY_WORDS: Record<MetalFamily, string> = {
@@ -257,6 +263,8 @@ const FAMILY_WORDS: Record<MetalFamily, string> = {
 	stainless: 'stainless',
 	aluminium: 'aluminium'
 };
+
+const aOrAn = (w: string): string => `${/^[aeiou]/i.test(w) ? 'an' : 'a'} ${w}`;
 
 /** Reports what the classification encodes, or that it could not be read. */
 function checkFillerClassificationUnguarded(ctx: CheckContext): Finding | null {
@@ -304,14 +312,13 @@ function checkFillerVsBaseMetalUnguarded(ctx: CheckContext): Finding | null {
 	if (!f || !base) return null;
 	const fit = fillerSuits(f, base);
 	const words = FAMILY_WORDS[base];
-	const message =
-		fit === 'ok'
+	const message = wrongFamily(f, base)
+		? `Wrong filler family: ${f.classification} is ${aOrAn(FAMILY_WORDS[f.family])} filler and does not suit ${words}.`
+		: fit === 'ok'
 			? `${f.classification} suits ${words}.`
-			: fit === 'caution'
-				? f.family === 'stainless'
-					? `${f.classification} on ${words} is normally for joining it to stainless; check that is intended.`
-					: `${f.classification} is a ${FAMILY_WORDS[f.family]} filler, stronger than ${words} usually needs; check the procedure calls for it.`
-				: `${f.classification} is a ${FAMILY_WORDS[f.family]} filler and does not suit ${words}.`;
+			: f.family === 'stainless'
+				? `${f.classification} on ${words} is normally for joining it to stainless; check that is intended.`
+				: `${f.classification} is a ${FAMILY_WORDS[f.family]} filler, stronger than ${words} usually needs; check the procedure calls for it.`;
 	return {
 		check: 'filler-vs-base-metal',
 		status: fit,

@@ -149,7 +149,10 @@ describe('the demo procedures', () => {
 			filler: { classification: 'ER308L' },
 			tungsten: { classification: 'EWX', diameterMm: 2.4 }
 		});
-		expect(r.findings.find((f) => f.check === 'filler-vs-base-metal')?.status).toBe('outside');
+		// AWS A5.9: ER308L is stainless wire; on A36 the mismatch is a caution (issue 3 §4)
+		const fit = r.findings.find((f) => f.check === 'filler-vs-base-metal');
+		expect(fit?.status).toBe('caution');
+		expect(fit?.message).toContain('Wrong filler family');
 		expect(r.findings.find((f) => f.field === 'tungsten.classification')?.status).toBe('caution');
 	});
 });
