@@ -5,7 +5,10 @@ export type ShadeProcess = 'SMAW' | 'GMAW-FCAW' | 'GTAW';
 
 export interface ShadeRow {
 	process: ShadeProcess;
-	/** Band is [minAmps, maxAmps); OSHA prints shared edges ("60-160", "160-250"). */
+	/**
+	 * Band is [minAmps, maxAmps); OSHA prints shared edges ("60-160", "160-250"). The last band of
+	 * a process includes its upper edge: the table prints "150-500", so 500 A is in it.
+	 */
 	minAmps: number;
 	maxAmps: number;
 	/** OSHA minimum protective shade. */
@@ -17,7 +20,8 @@ export interface ShadeRow {
 }
 
 // A current on a shared edge (e.g. exactly 160 A) is put in the upper, darker band: when two rows
-// of a safety table overlap, the darker answer is the safe one.
+// of a safety table overlap, the darker answer is the safe one. The top edge of each process
+// (SMAW 550 A, GMAW/FCAW and GTAW 500 A) is shared with no row, so it stays in the last band.
 const row = (
 	process: ShadeProcess,
 	minAmps: number,

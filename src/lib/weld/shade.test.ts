@@ -14,6 +14,7 @@ const cases: [Process, number, number, number | null][] = [
 	['GMAW', 249.9, 10, 12],
 	['GMAW', 250, 10, 14],
 	['GMAW', 499.9, 10, 14],
+	['GMAW', 500, 10, 14], // the top edge: OSHA prints "250-500"
 	['FCAW', 59, 7, null],
 	['FCAW', 200, 10, 12],
 	// GTAW: <50: 8/10, 50-150: 8/12, 150-500: 10/14
@@ -24,6 +25,7 @@ const cases: [Process, number, number, number | null][] = [
 	['GTAW', 149.9, 8, 12],
 	['GTAW', 150, 10, 14],
 	['GTAW', 499.9, 10, 14],
+	['GTAW', 500, 10, 14], // the top edge: OSHA prints "150-500"
 	// SMAW: <60: 7/-, 60-160: 8/10, 160-250: 10/12, 250-550: 11/14
 	['SMAW', 59.9, 7, null],
 	['SMAW', 60, 8, 10],
@@ -31,7 +33,8 @@ const cases: [Process, number, number, number | null][] = [
 	['SMAW', 160, 10, 12],
 	['SMAW', 249.9, 10, 12],
 	['SMAW', 250, 11, 14],
-	['SMAW', 549.9, 11, 14]
+	['SMAW', 549.9, 11, 14],
+	['SMAW', 550, 11, 14] // the top edge: OSHA prints "250-550"
 ];
 
 describe('lens shade by process and amps, at and across every band edge', () => {
@@ -42,9 +45,20 @@ describe('lens shade by process and amps, at and across every band edge', () => 
 		expect(s?.aboveTable).toBe(false);
 	});
 	it('past the end of the table keeps the last row and says so', () => {
-		expect(lensShade('GTAW', 500)).toMatchObject({ minimum: 10, aboveTable: true });
+		// OSHA 29 CFR 1910.133(a)(5): the last bands end at 500 A (GTAW, GMAW) and 550 A (SMAW)
+		expect(lensShade('GTAW', 500.1)).toMatchObject({ minimum: 10, aboveTable: true });
+		expect(lensShade('GTAW', 501)).toMatchObject({ minimum: 10, aboveTable: true });
+		expect(lensShade('GTAW', 550)).toMatchObject({ minimum: 10, aboveTable: true });
+		expect(lensShade('GMAW', 501)).toMatchObject({ minimum: 10, aboveTable: true });
 		expect(lensShade('GMAW', 650)).toMatchObject({ minimum: 10, aboveTable: true });
-		expect(lensShade('SMAW', 550)).toMatchObject({ minimum: 11, aboveTable: true });
+		expect(lensShade('SMAW', 551)).toMatchObject({ minimum: 11, aboveTable: true });
+	});
+	it('the check at the top edge is ok, and a caution past it', () => {
+		const at = (amps: number) =>
+			checkLensShade({ s: { process: 'GTAW', amps, lensShade: 12 }, system: 'imperial' });
+		expect(at(500)?.status).toBe('ok'); // OSHA 29 CFR 1910.133(a)(5): "150-500" includes 500 A
+		expect(at(501)?.status).toBe('caution'); // OSHA 29 CFR 1910.133(a)(5): past the table
+		expect(at(501)?.message).toContain('past the end of the OSHA table');
 	});
 	it('no answer for negative or non-finite amps', () => {
 		expect(lensShade('GTAW', -1)).toBeNull();

@@ -12,7 +12,7 @@ export interface Shade {
 	/** Null where the guide gives no suggestion (the lowest SMAW and GMAW bands). */
 	suggested: number | null;
 	row: ShadeRow;
-	/** True when the current is past the last band of the table; the last row is used. */
+	/** True when the current is past the last band's upper edge (which is in the table). */
 	aboveTable: boolean;
 }
 
@@ -23,14 +23,19 @@ const TABLE_PROCESS: Record<Process, ShadeProcess> = {
 	GTAW: 'GTAW'
 };
 
-/** Shade for a process at an amperage; a current on a shared band edge takes the darker row. */
+/**
+ * Shade for a process at an amperage; a current on a shared band edge takes the darker row. The
+ * last band includes its upper edge (OSHA prints GTAW "150-500": 500 A is in the table).
+ */
 export function lensShade(process: Process, amps: number): Shade | null {
 	const p = TABLE_PROCESS[process];
 	if (!p || !isNum(amps) || amps < 0) return null;
 	const rows = SHADE_TABLE.filter((r) => r.process === p);
-	const hit = rows.find((r) => amps >= r.minAmps && amps < r.maxAmps);
 	const last = rows[rows.length - 1];
-	const row = hit ?? (last && amps >= last.maxAmps ? last : undefined);
+	const hit = rows.find(
+		(r) => amps >= r.minAmps && (amps < r.maxAmps || (r === last && amps === r.maxAmps))
+	);
+	const row = hit ?? (last && amps > last.maxAmps ? last : undefined);
 	if (!row) return null;
 	return { minimum: row.minimum, suggested: row.suggested, row, aboveTable: !hit };
 }
