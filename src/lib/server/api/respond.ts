@@ -46,14 +46,19 @@ export async function apiMember(event: RequestEvent, ...roles: Role[]): Promise<
 	return user;
 }
 
-/** Reads a JSON body and validates it; a body that is not JSON is a 400 like any other bad input. */
+/**
+ * Reads a JSON body and validates it. A body that is not JSON, or not sent as JSON, is a 400 with
+ * `{ errors }` like any other bad input: the API contract answers bad input that way only.
+ */
 export async function readBody<S extends z.ZodType>(
 	event: RequestEvent,
 	schema: S
 ): Promise<z.output<S>> {
 	const type = event.request.headers.get('content-type') ?? '';
 	if (!type.toLowerCase().startsWith('application/json')) {
-		fail(415, { errors: { '': ['Send the body as application/json.'] } });
+		fail(400, {
+			errors: { '': ['The body must be JSON, sent with content-type application/json.'] }
+		});
 	}
 	let raw: unknown;
 	try {

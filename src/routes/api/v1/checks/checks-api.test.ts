@@ -120,9 +120,12 @@ describe('POST /api/v1/checks', () => {
 			const res = await call(checks as never, null, { raw });
 			expect(res.status).toBe(400);
 		}
-		expect(
-			(await call(checks as never, null, { raw: 'process=GTAW', type: 'text/plain' })).status
-		).toBe(415);
+		// Not sent as JSON: the contract's 400 with `errors`, not a 415.
+		const plain = await call(checks as never, null, { raw: 'process=GTAW', type: 'text/plain' });
+		expect(plain.status).toBe(400);
+		expect(await plain.json()).toEqual({
+			errors: { '': ['The body must be JSON, sent with content-type application/json.'] }
+		});
 	});
 
 	it('answers 401 with no session and no token, and for an unknown token', async () => {
