@@ -1,4 +1,4 @@
-import { mkdtempSync } from 'node:fs';
+import { mkdtempSync, readdirSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import sharp from 'sharp';
@@ -122,6 +122,35 @@ describe('settings records', () => {
 		const exe = { name: 'setup.jpg', bytes: new TextEncoder().encode('MZ\x90\x00rest') };
 		await expect(svc.createRecord(engineer, form(), [exe])).rejects.toThrow(/not a JPEG or PNG/);
 		expect(await SettingsRecord.count()).toBe(before);
+	});
+
+	it('refuses a 7th photo at the photos field and stores nothing', async () => {
+		const img = (background: string) =>
+			sharp({ create: { width: 8, height: 8, channels: 3, background } });
+		const photos = await Promise.all(
+			['#111', '#222', '#333', '#444', '#555', '#666', '#777'].map(async (c, i) => ({
+				name: `bead-${i + 1}.${i % 2 ? 'png' : 'jpg'}`,
+				bytes: i % 2 ? await img(c).png().toBuffer() : await img(c).jpeg().toBuffer()
+			}))
+		);
+		expect(svc.MAX_PHOTOS).toBe(6); // issue 4: up to 6 images per record
+		const files = () => readdirSync(process.env.UPLOADS_DIR!, { recursive: true }).length;
+		const [records, stored] = [await SettingsRecord.count(), files()];
+		const refused = await svc.createRecord(engineer, form(), photos).catch((e: unknown) => e);
+		expect(refused).toMatchObject({ name: 'RefusedError', field: 'photos' });
+		expect((refused as Error).message).toBe('A record holds up to 6 photos.');
+		expect([await SettingsRecord.count(), files()]).toEqual([records, stored]);
+		// An edit counts the photos already kept: 5 on the record, 2 more is one too many.
+		const { id } = await svc.createRecord(engineer, form(), photos.slice(0, 5));
+		const withFive = files();
+		await expect(svc.updateRecord(engineer, id, form(), photos.slice(5))).rejects.toMatchObject({
+			field: 'photos',
+			message: 'A record holds up to 6 photos (it has 5).'
+		});
+		expect(await SettingsPhoto.count({ where: { recordId: id } })).toBe(5);
+		expect(files()).toBe(withFive);
+		await svc.updateRecord(engineer, id, form(), photos.slice(5, 6)); // the 6th still fits
+		expect(await SettingsPhoto.count({ where: { recordId: id } })).toBe(6);
 	});
 
 	it('walking the date index in order gives the same page as sorting the matches', async () => {
