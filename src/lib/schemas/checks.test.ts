@@ -167,21 +167,30 @@ describe('pqr-ranges body and answer (ASME IX QW-451.1)', () => {
 		}); // QW-451.1: 1/16 in to 2T
 		expect(r.ok && r.answer.depositedMax).toEqual({ value: 0.75, unit: 'in' }); // QW-451.1: 2t
 		expect(r.ok && r.answer.source.kind).toBe('published');
-		const mm = pqrRangesAnswer(
-			pqrRangesBodySchema.parse({ process: 'GMAW', couponThickness: { value: 25, unit: 'mm' } })
-		);
-		expect(mm.ok && mm.answer.baseMetal).toEqual({
+		const mm = (t: number) =>
+			pqrRangesAnswer(
+				pqrRangesBodySchema.parse({
+					process: 'GMAW',
+					couponThickness: { value: 25, unit: 'mm' },
+					depositedThickness: { value: t, unit: 'mm' }
+				})
+			);
+		const thin = mm(10);
+		expect(thin.ok && thin.answer.baseMetal).toEqual({
 			min: { value: 5, unit: 'mm' },
 			max: { value: 50, unit: 'mm' }
-		}); // QW-451.1
-		expect(mm.ok && mm.answer.depositedMax).toBeUndefined();
+		}); // QW-451.1: 19 to <38 mm row, 5 mm to 2T
+		expect(thin.ok && thin.answer.depositedMax).toEqual({ value: 20, unit: 'mm' }); // QW-451.1: t < 19 mm -> 2t
+		const thick = mm(25);
+		expect(thick.ok && thick.answer.depositedMax).toEqual({ value: 50, unit: 'mm' }); // QW-451.1: t >= 19 mm -> 2T
 	});
 	it('applies the short-circuit limit only to GMAW', () => {
 		const b = (process: string) =>
 			pqrRangesBodySchema.parse({
 				process,
 				transfer: 'short-circuit',
-				couponThickness: { value: 0.25, unit: 'in' }
+				couponThickness: { value: 0.25, unit: 'in' },
+				depositedThickness: { value: 0.25, unit: 'in' }
 			});
 		expect(
 			pqrRangesAnswer(b('GMAW')).ok &&
@@ -199,6 +208,13 @@ describe('pqr-ranges body and answer (ASME IX QW-451.1)', () => {
 		expect(r.success).toBe(false);
 		expect(r.error?.issues[0]?.path).toEqual(['couponThickness', 'value']);
 		expect(pqrRangesBodySchema.safeParse({ process: 'GTAW' }).success).toBe(false);
+		// The contract's body carries t: without it there is no depositedMax to answer.
+		const noT = pqrRangesBodySchema.safeParse({
+			process: 'GTAW',
+			couponThickness: { value: 0.375, unit: 'in' }
+		});
+		expect(noT.error?.issues.map((i) => i.path.join('.'))).toEqual(['depositedThickness']);
+		expect(noT.error?.issues[0]?.message).toMatch(/^Required\. Give it as \{ "value"/);
 	});
 });
 

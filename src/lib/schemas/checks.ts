@@ -35,7 +35,12 @@ function quantity<U extends string>(
 				: v,
 		z.enum(units, { error: `Use one of: ${list(units)}.` })
 	);
-	return z.object({ value: z.number({ error: 'Give a number.' }), unit }).superRefine((q, ctx) => {
+	const shape = `Give it as { "value": number, "unit": "${units[0]}" } (unit one of ${list(units)}).`;
+	const object = z.object(
+		{ value: z.number({ error: 'Give a number.' }), unit },
+		{ error: (iss) => (iss.input === undefined ? `Required. ${shape}` : shape) }
+	);
+	return object.superRefine((q, ctx) => {
 		const v = toSi(q.value, q.unit);
 		const low = si.inclusiveMin ? v < si.min : v <= si.min;
 		if (low)
@@ -251,10 +256,12 @@ export function parseChecksBody(
 
 const couponLength = length(2540, 'Keep it at or under 100 in (2540 mm).');
 
+// The contract's body carries both T and t, and its answer always carries depositedMax (a
+// quantity, never null); QW-451.1 reads that maximum from t, so t is required.
 export const pqrRangesBodySchema = z.object({
 	process: z.enum(PROCESSES, { error: `Process is one of ${list(PROCESSES)}.` }),
 	couponThickness: couponLength,
-	depositedThickness: couponLength.optional(),
+	depositedThickness: couponLength,
 	/** Optional: short-circuit GMAW takes the QW-403.10 limit. */
 	transfer: z.enum(TRANSFERS, { error: `Transfer is one of ${list(TRANSFERS)}.` }).optional()
 });
@@ -270,7 +277,7 @@ export type PqrRangesAnswer =
 			ok: true;
 			answer: {
 				baseMetal: { min: Qty; max: Qty };
-				depositedMax?: Qty;
+				depositedMax: Qty;
 				row: string;
 				notes: string[];
 				source: FindingSource;
@@ -283,11 +290,16 @@ export function pqrRangesAnswer(body: PqrRangesBody): PqrRangesAnswer {
 	const transfer = body.process === 'GMAW' ? body.transfer : undefined;
 	const r = pqrThicknessRange(body.couponThickness, body.depositedThickness, transfer);
 	if (!r.ok) return { ok: false, errors: { couponThickness: [r.message] } };
+	if (!r.depositedMax)
+		return {
+			ok: false,
+			errors: { depositedThickness: ['Give the deposited weld metal thickness t.'] }
+		};
 	return {
 		ok: true,
 		answer: {
 			baseMetal: r.baseMetal,
-			...(r.depositedMax ? { depositedMax: r.depositedMax } : {}),
+			depositedMax: r.depositedMax,
 			row: r.row,
 			notes: r.notes,
 			source: r.source

@@ -163,10 +163,34 @@ describe('POST /api/v1/checks/pqr-ranges', () => {
 		expect(body.source.label).toContain('QW-451.1');
 	});
 
-	it('refuses a missing coupon thickness with a field error', async () => {
+	it('always answers depositedMax, in the deposit unit', async () => {
+		// ASME IX QW-451.1: coupon 1 in (3/4 to <1-1/2 in row); t 3/4 in and over -> 2T = 2 in.
+		const res = await call(pqrRanges as never, {
+			process: 'GTAW',
+			couponThickness: { value: 1, unit: 'in' },
+			depositedThickness: { value: 20, unit: 'mm' }
+		});
+		expect(res.status).toBe(200);
+		const body = await res.json();
+		expect(Object.keys(body)).toEqual(
+			expect.arrayContaining(['baseMetal', 'depositedMax', 'source'])
+		);
+		expect(body.depositedMax).toEqual({ value: 50.8, unit: 'mm' }); // QW-451.1: 2T, 2 in = 50.8 mm
+	});
+
+	it('refuses a missing coupon or deposit thickness with a field error', async () => {
 		const res = await call(pqrRanges as never, { process: 'GTAW' });
 		expect(res.status).toBe(400);
-		expect(Object.keys((await res.json()).errors)).toContain('couponThickness');
+		expect(Object.keys((await res.json()).errors)).toEqual(
+			expect.arrayContaining(['couponThickness', 'depositedThickness'])
+		);
+		// The contract's body carries t and its answer always carries depositedMax, read from t.
+		const noT = await call(pqrRanges as never, {
+			process: 'GTAW',
+			couponThickness: { value: 0.375, unit: 'in' }
+		});
+		expect(noT.status).toBe(400);
+		expect(Object.keys((await noT.json()).errors)).toEqual(['depositedThickness']);
 	});
 });
 
