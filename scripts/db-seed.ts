@@ -1,7 +1,20 @@
-// npm run db:seed — adds the invented demo shops (idempotent).
-import { migrate, sequelize } from '../src/lib/server/db';
-import { seedDemo } from '../src/lib/server/seed/seed-demo';
+// npm run db:seed — adds the invented demo shops (idempotent), only to a demo, development or
+// test database: their people sign in with known demo passwords (see seed-guard.ts).
+import { config } from '../src/lib/server/config';
+import { demoSeedRefusal } from '../src/lib/server/seed/seed-guard';
 
+const refusal = demoSeedRefusal({
+	demo: config.isDemo,
+	nodeEnv: config.nodeEnv,
+	databaseFile: config.databaseFile
+});
+if (refusal) {
+	console.error(refusal);
+	process.exit(1);
+}
+
+const { migrate, sequelize } = await import('../src/lib/server/db');
+const { seedDemo } = await import('../src/lib/server/seed/seed-demo');
 await migrate();
 const { shop, other } = await seedDemo();
 console.log(`Seeded ${shop.name} and ${other.name}.`);

@@ -30,7 +30,11 @@ export const config = {
 	get origin() {
 		return read('ORIGIN', 'http://localhost:5173');
 	},
+	/** BEADLINE_DEMO=1 (set by `npm run demo`): a database the demo passwords may be seeded into. */
 	get isDemo() {
 		return process.env.BEADLINE_DEMO === '1';
+	},
+	get nodeEnv() {
+		return process.env.NODE_ENV;
 	}
 };
