@@ -239,3 +239,10 @@ export const POLARITY_PRACTICE: Source = {
 	edition: 'shop practice',
 	kind: 'common practice'
 };
+
+/** What a record is checked against when it names a procedure: the revision's own ranges. */
+export const PROCEDURE_RANGES: Source = {
+	label: 'The procedure (WPS) ranges',
+	edition: 'the revision the record is checked against',
+	kind: 'published'
+};

@@ -88,7 +88,7 @@ export const CHECK_CATALOGUE: readonly CatalogueEntry[] = [
 		'settings',
 		'Current type and polarity',
 		'Current type against the process and what the filler classification calls for.',
-		[S.AWS_A5_CLASSIFICATION]
+		[S.POLARITY_PRACTICE, S.AWS_A5_CLASSIFICATION]
 	),
 	e(
 		'heat-input',
@@ -158,7 +158,7 @@ export const CHECK_CATALOGUE: readonly CatalogueEntry[] = [
 		'settings',
 		'Within the procedure',
 		'Amps, volts, travel speed, wire feed and heat input against the procedure’s ranges.',
-		[]
+		[S.PROCEDURE_RANGES]
 	),
 	e(
 		'requalification',

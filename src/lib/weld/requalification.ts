@@ -1,17 +1,14 @@
 // Within range: a value against a procedure range, and a procedure against its PQR
 // (AWS D1.1 requalification triggers).
 import { D1_1_REQUALIFICATION, D1_1_REQUALIFICATION_SOURCE } from '$reference/qualification-rules';
+import { PROCEDURE_RANGES } from '$reference/sources';
 import type { Band, CurrentType, Process, Source, Transfer } from '$reference/types';
 import type { CheckId } from './check-catalogue';
 import type { CheckContext } from './context';
 import { expected, isNum, rangeText, round, sourceOf, type Finding, guardCheck } from './findings';
 import { formatSpeed, mmPerSToSpeed } from './units';
 
-export const PROCEDURE_SOURCE: Source = {
-	label: 'The procedure (WPS) ranges',
-	edition: 'the revision the record is checked against',
-	kind: 'published'
-};
+export const PROCEDURE_SOURCE: Source = PROCEDURE_RANGES;
 
 export interface RangeCheck {
 	check?: CheckId;
