@@ -1,5 +1,12 @@
 import { chromium, expect, test } from '@playwright/test';
-import { boothToken, procedureId, qrVideo, usesToday } from './support/booth';
+import {
+	boothToken,
+	isoDay,
+	procedureId,
+	qrVideo,
+	sixMonthsAfter,
+	usesToday
+} from './support/booth';
 import { admin, engineer, otherAdmin, signIn, welder } from './support/people';
 
 // The booth, on a phone: what a scan shows signed out and signed in, the warning on a stale
@@ -7,11 +14,7 @@ import { admin, engineer, otherAdmin, signIn, welder } from './support/people';
 // Data: the demo seed (WPS-001 revision 1 superseded by 2, WPS-002 revision 1 in force, WPS-004
 // withdrawn); tokens are read from the server's database.
 
-const pad = (n: number) => String(n).padStart(2, '0');
-const today = () => {
-	const d = new Date();
-	return `${d.getFullYear()}-${pad(d.getMonth() + 1)}-${pad(d.getDate())}`;
-};
+const today = () => isoDay(new Date());
 
 test('a superseded sheet shows the warning and leads to the current revision; signed out sees status only', async ({
 	page
@@ -40,6 +43,12 @@ test('a welder of the shop sees the values and cautions, and one tap logs GTAW o
 	const path = `/b/${await boothToken('WPS-001', 2)}`;
 	const before = await usesToday(welder.email, 'GTAW', today());
 	await signIn(page, welder);
+	// The welder's own GTAW qualification (seeded: last used 12 days ago).
+	const lapsesOn = page
+		.locator('[data-testid="qualification"][data-process="GTAW"]')
+		.getByTestId('lapses-on');
+	await page.goto('/welders/me');
+	const was = await lapsesOn.textContent();
 	await page.goto(path);
 	const values = page.getByTestId('booth-values');
 	await expect(values).toContainText('Amperage');
@@ -60,6 +69,29 @@ test('a welder of the shop sees the values and cautions, and one tap logs GTAW o
 	});
 	expect(again.status()).toBe(200);
 	expect(await usesToday(welder.email, 'GTAW', today())).toBe(1);
+
+	// The tap restarted the six months: the lapse date moved to six months after today.
+	await page.goto('/welders/me');
+	await expect(lapsesOn).toHaveText(sixMonthsAfter(today())); // ASME IX QW-322.1
+	if (before === 0) expect(was! < sixMonthsAfter(today()), `was ${was}`).toBe(true);
+});
+
+test('a withdrawn revision shows the warning; with none in force it says so', async ({ page }) => {
+	// Demo WPS-004: revision 1 approved, then withdrawn, and no revision after it.
+	await page.goto(`/b/${await boothToken('WPS-004', 1)}`);
+	await expect(page.getByTestId('booth')).toHaveAttribute('data-state', 'withdrawn');
+	const warning = page.getByTestId('booth-warning');
+	await expect(warning).toBeVisible();
+	await expect(warning).toContainText('Withdrawn');
+	await expect(warning).toContainText('Do not weld to this sheet.');
+	await expect(warning).toContainText('No revision of this procedure is in force now.');
+	await expect(page.getByTestId('booth-current')).toHaveCount(0);
+	await expect(page.getByTestId('booth-number')).toHaveText('WPS-004');
+	// Signed in, a member still gets no values to weld to.
+	await signIn(page, engineer);
+	await page.goto(`/b/${await boothToken('WPS-004', 1)}`);
+	await expect(page.getByTestId('booth-warning')).toContainText('Withdrawn');
+	await expect(page.getByTestId('booth-values')).toHaveCount(0);
 });
 
 test('a member without a welder record sees the values and says so plainly; another shop sees status only', async ({

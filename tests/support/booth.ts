@@ -1,5 +1,5 @@
 // Helpers for the booth journeys: the seeded procedures' booth tokens read from the e2e server's
-// database, and a Y4M video of a QR code for Chromium's fake camera.
+// database, the lapse date a use sets, and a Y4M video of a QR code for Chromium's fake camera.
 import { writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -34,6 +34,18 @@ export async function usesToday(email: string, process: string, day: string): Pr
 		[email, process, day]
 	);
 	return row?.n ?? 0;
+}
+
+const pad = (n: number) => String(n).padStart(2, '0');
+/** A local calendar day as YYYY-MM-DD (the server's `localDay`). */
+export const isoDay = (d: Date) =>
+	`${d.getFullYear()}-${pad(d.getMonth() + 1)}-${pad(d.getDate())}`;
+
+/** Six calendar months later, clamped to a shorter month's end (ASME IX QW-322.1, our rule). */
+export function sixMonthsAfter(day: string): string {
+	const [y, m, d] = day.split('-').map(Number) as [number, number, number];
+	const last = new Date(y, m - 1 + 6 + 1, 0).getDate();
+	return isoDay(new Date(y, m - 1 + 6, Math.min(d, last)));
 }
 
 /**
