@@ -3,18 +3,10 @@ import { execFileSync } from 'node:child_process';
 import { readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { simpleParser } from 'mailparser';
+import { isoDay, sixMonthsAfter } from './support/booth';
 import { firstLink, waitForMail } from './support/mail';
 import { pdfQr, pdfText } from './support/pdf';
 import { admin, signIn } from './support/people';
-
-const pad = (n: number) => String(n).padStart(2, '0');
-const iso = (d: Date) => `${d.getFullYear()}-${pad(d.getMonth() + 1)}-${pad(d.getDate())}`;
-/** Six calendar months later, clamped to a shorter month's end (ASME IX QW-322.1, our rule). */
-function sixMonthsAfter(day: string): string {
-	const [y, m, d] = day.split('-').map(Number) as [number, number, number];
-	const last = new Date(y, m - 1 + 6 + 1, 0).getDate();
-	return iso(new Date(y, m - 1 + 6, Math.min(d, last)));
-}
 
 async function acceptInvite(page: Page, link: string, password: string) {
 	await page.goto(link);
@@ -55,7 +47,7 @@ test('a welder qualified 3G GTAW, kept current by a tap, checked by the card QR,
 	const welderUrl = adminPage.url();
 
 	const t = new Date();
-	const testDate = iso(new Date(t.getFullYear(), t.getMonth() - 2, 10));
+	const testDate = isoDay(new Date(t.getFullYear(), t.getMonth() - 2, 10));
 	await adminPage.getByRole('link', { name: 'Record a qualification' }).click();
 	const form = adminPage.getByTestId('qualification-form');
 	await form.getByLabel('Process').selectOption('GTAW');
@@ -79,7 +71,7 @@ test('a welder qualified 3G GTAW, kept current by a tap, checked by the card QR,
 	await welderPage.getByRole('link', { name: 'My qualifications' }).click();
 	await welderPage.getByTestId('tap-GTAW').click();
 	await expect(welderPage.getByTestId('flash')).toContainText('Logged: GTAW today');
-	const today = iso(new Date());
+	const today = isoDay(new Date());
 	await expect(welderPage.getByTestId('lapses-on')).toHaveText(sixMonthsAfter(today));
 	await adminPage.reload();
 	await expect(qual.getByTestId('lapses-on')).toHaveText(sixMonthsAfter(today));
@@ -105,6 +97,13 @@ test('a welder qualified 3G GTAW, kept current by a tap, checked by the card QR,
 	const row = visitor.getByTestId('verify-row').filter({ hasText: 'GTAW' });
 	await expect(row.getByTestId('status')).toHaveAttribute('data-state', 'current');
 	await expect(visitor.getByTestId('ranges')).toHaveCount(0);
+	// A member of the shop opening the same link sees the ranges and the log as well.
+	const member = await adminPage.context().newPage();
+	await member.goto(qr!);
+	await expect(member.getByTestId('verify-name')).toHaveText('Nell Carver');
+	await expect(member.getByTestId('ranges').getByTestId('range-groove')).toHaveText('F, V'); // ASME IX QW-461.9, 3G
+	await expect(member.getByTestId('use').first()).toContainText('logged at the booth');
+	await member.close();
 
 	// The qualification is withdrawn (a failed retest): the scanned card says so at once.
 	await adminPage.reload();
