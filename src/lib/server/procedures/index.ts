@@ -16,6 +16,7 @@ export {
 	WRONG_PASSWORD
 } from './decide';
 export { checkIntegrity, revisionContent, type Integrity } from './digest';
+export { diffRevisions, type DiffSide } from './diff';
 export { findProcedure, findRevision, readVariables } from './find';
 export { linksOf } from './links';
 export { listProcedures, reviewQueue, PAGE_SIZE, type ProcedureRow, type QueueItem } from './list';

@@ -282,6 +282,42 @@ describe('signing', () => {
 		).rejects.toThrow();
 		expect(await SignOff.count({ where: { printedName: 'Someone Else' } })).toBe(0);
 	});
+
+	it('checks each signed revision the diff shows, and writes a mismatch to the trail', async () => {
+		const id = await inReview();
+		await svc.approveRevision(
+			a.inspector,
+			id,
+			1,
+			{ password: T.PASSWORD, comment: '' },
+			null,
+			quiet
+		);
+		const { rev } = await svc.startRevision(a.engineer, id);
+		const clean = await svc.diffRevisions(a.engineer, id, rev, 1);
+		expect(clean.b).toMatchObject({ rev: 1, integrity: { signed: true, ok: true } });
+		expect(clean.a.integrity.signed).toBe(false);
+		const row = await ProcedureRevision.findOne({ where: { procedureId: id, rev: 1 } });
+		await sequelize.query(
+			'UPDATE procedure_revisions SET variables = replace(variables, \'"max":135\', \'"max":185\') WHERE id = ?',
+			{ replacements: [row!.id] }
+		);
+		const tamperEvents = () =>
+			AuditEvent.count({
+				where: { objectId: String(row!.id), action: 'procedure_revision.tamper_detected' }
+			});
+		const seen = await svc.diffRevisions(a.engineer, id, rev, 1);
+		expect(seen.b.integrity.ok).toBe(false);
+		expect(seen.b.integrity.problems).toContain(
+			'The revision as stored now differs from what was signed.'
+		);
+		expect(seen.a.integrity.ok).toBe(true);
+		expect(await tamperEvents()).toBe(1);
+		// Either side: revision 1 against itself is one view, one event.
+		const same = await svc.diffRevisions(a.engineer, id, 1, 1);
+		expect(same.a.integrity.ok).toBe(false);
+		expect(await tamperEvents()).toBe(2);
+	});
 });
 
 describe('scoping and records', () => {
