@@ -99,6 +99,26 @@ test('a signed revision changed behind the app shows the tamper banner', async (
 		[id]
 	);
 	expect(logged?.n).toBeGreaterThan(0);
+
+	// The diff shows the same banner for the signed revision it shows, and records the view too.
+	await eng.goto(`/procedures/${id}/revisions/1/diff`);
+	await expect(eng.getByTestId('tamper-banner')).toHaveCount(1);
+	await expect(eng.getByTestId('tamper-banner')).toHaveAttribute('data-rev', '1');
+	await expect(eng.getByTestId('tamper-banner')).toContainText('changed since it was signed');
+	const again = await sqlGet<{ n: number }>(
+		"SELECT count(*) AS n FROM audit_events WHERE action = 'procedure_revision.tamper_detected' AND object_id = (SELECT CAST(id AS TEXT) FROM procedure_revisions WHERE procedure_id = ? AND rev = 1)",
+		[id]
+	);
+	expect(again!.n).toBeGreaterThan(logged!.n);
+
+	// Downloading its sheet is on the trail, marked as not matching its signature.
+	const sheet = await eng.request.get(`/procedures/${id}/sheet`);
+	expect(sheet.status()).toBe(200);
+	const download = await sqlGet<{ after: string }>(
+		"SELECT after FROM audit_events WHERE action = 'procedure_sheet.downloaded' AND object_id = (SELECT CAST(id AS TEXT) FROM procedure_revisions WHERE procedure_id = ? AND rev = 1)",
+		[id]
+	);
+	expect(JSON.parse(download!.after)).toMatchObject({ rev: 1, intact: false });
 });
 
 test('two approvals at the same moment: exactly one signs, the other hears it was decided', async ({

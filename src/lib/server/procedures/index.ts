@@ -17,6 +17,12 @@ export {
 } from './decide';
 export { checkIntegrity, revisionContent, type Integrity } from './digest';
 export { diffRevisions, type DiffSide } from './diff';
+export {
+	recordedOrRefused,
+	recordSheetBatchDownload,
+	recordSheetDownload,
+	type PrintedSheet
+} from './sheet-audit';
 export { findProcedure, findRevision, readVariables } from './find';
 export { linksOf } from './links';
 export { listProcedures, reviewQueue, PAGE_SIZE, type ProcedureRow, type QueueItem } from './list';

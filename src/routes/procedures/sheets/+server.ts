@@ -4,6 +4,7 @@ import { currentSheets } from '$lib/server/booth';
 import { fileSafe, paperOf, pdfResponse, rethrowSheet } from '$lib/server/booth/sheet-response';
 import { procedureSheetsPdf } from '$lib/server/pdf/procedure-sheet';
 import { VIEW_ROLES } from '$lib/server/procedures/access';
+import { recordedOrRefused, recordSheetBatchDownload } from '$lib/server/procedures/sheet-audit';
 import type { RequestHandler } from './$types';
 
 // GET /procedures/sheets[?paper=letter|a4]: one PDF with the sheet of every revision in force.
@@ -17,5 +18,6 @@ export const GET: RequestHandler = async (event) => {
 		});
 	const day = new Date().toISOString().slice(0, 10);
 	const bytes = await procedureSheetsPdf(`Current procedure sheets — ${shopName}, ${day}`, sheets);
+	await recordedOrRefused(() => recordSheetBatchDownload(user, sheets, event));
 	return pdfResponse(bytes, `current-sheets-${fileSafe(shopName)}-${day}.pdf`);
 };

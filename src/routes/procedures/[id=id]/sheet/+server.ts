@@ -4,6 +4,7 @@ import { sheetFor } from '$lib/server/booth';
 import { fileSafe, paperOf, pdfResponse, rethrowSheet } from '$lib/server/booth/sheet-response';
 import { procedureSheetPdf } from '$lib/server/pdf/procedure-sheet';
 import { VIEW_ROLES } from '$lib/server/procedures/access';
+import { recordedOrRefused, recordSheetDownload } from '$lib/server/procedures/sheet-audit';
 import type { RequestHandler } from './$types';
 
 // GET /procedures/<id>/sheet[?rev=N][&paper=letter|a4]: the revision in force, or any signed one.
@@ -18,5 +19,6 @@ export const GET: RequestHandler = async (event) => {
 		rethrowSheet
 	);
 	const bytes = await procedureSheetPdf(input);
+	await recordedOrRefused(() => recordSheetDownload(user, input, event));
 	return pdfResponse(bytes, `${fileSafe(input.number)}-rev${input.rev}-${input.paper}.pdf`);
 };
