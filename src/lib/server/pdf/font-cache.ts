@@ -3,6 +3,7 @@
 // OpenType shaping (GSUB/GPOS), which for DejaVu costs far more than the drawing itself. A sheet
 // prints Latin text, signs and digits: a plain character-to-glyph map (no kerning, no
 // ligatures) draws the same letters, and the subset still covers only the glyphs used.
+import { EventEmitter } from 'node:events';
 import fontkit from '@pdf-lib/fontkit';
 import type { PDFDocument } from 'pdf-lib';
 import { fontFiles, type PdfFonts } from './fonts';
@@ -50,7 +51,49 @@ function withPlainLayout(font: Font): Font {
 		}
 		return g;
 	}) as Font['getGlyph'];
+	font.createSubset = syncSubsets(font);
 	return font;
+}
+
+type Subset = ReturnType<Font['createSubset']>;
+type Encoder = { push: (chunk: Uint8Array | null) => boolean; end: () => void };
+
+/**
+ * Subsets whose bytes are ready at once. fontkit's bundle defers each subset's encoding and
+ * every stream event with setTimeout (its stand-in for process.nextTick), so a save waited a
+ * timer tick or more for each face; here the same encoder runs in place and its chunks are
+ * handed over joined, on a microtask (pdf-lib listens for them right after the call).
+ */
+function syncSubsets(font: Font): Font['createSubset'] {
+	const create = font.createSubset.bind(font);
+	// The encoder's class, from one throwaway subset (its deferred encoding is harmless).
+	const Stream = (create().encodeStream() as unknown as { constructor: new () => Encoder })
+		.constructor;
+	return () => {
+		const subset = create() as Subset & { encode: (s: Encoder) => void };
+		subset.encodeStream = () => {
+			const out = new EventEmitter();
+			const chunks: Uint8Array[] = [];
+			let failure: unknown;
+			try {
+				const s = new Stream();
+				s.push = (chunk) => (chunk && chunks.push(chunk), true);
+				subset.encode(s);
+				s.end();
+			} catch (e) {
+				failure = e;
+			}
+			queueMicrotask(() => {
+				if (failure) out.emit('error', failure);
+				else {
+					out.emit('data', Buffer.concat(chunks));
+					out.emit('end');
+				}
+			});
+			return out as unknown as ReturnType<Subset['encodeStream']>;
+		};
+		return subset;
+	};
 }
 
 const sharedFontkit = {

@@ -13,6 +13,7 @@ import {
 	type RGB
 } from 'pdf-lib';
 import QRCode from 'qrcode';
+import { widthOf } from './pdf-text';
 
 export const MM = 72 / 25.4;
 export const PAPER: Record<'a4' | 'letter', [number, number]> = {
@@ -28,9 +29,9 @@ export const WHITE = rgb(1, 1, 1);
 
 /** Cuts text to a width with an ellipsis, so a long value never runs off the page. */
 export function fit(text: string, font: PDFFont, size: number, width: number): string {
-	if (font.widthOfTextAtSize(text, size) <= width) return text;
+	if (widthOf(font, text, size) <= width) return text;
 	let t = text;
-	while (t.length > 1 && font.widthOfTextAtSize(`${t}…`, size) > width) t = t.slice(0, -1);
+	while (t.length > 1 && widthOf(font, `${t}…`, size) > width) t = t.slice(0, -1);
 	return `${t}…`;
 }
 
@@ -51,11 +52,11 @@ export function wrap(
 		let line = '';
 		for (const word of para.split(/\s+/).filter(Boolean)) {
 			const next = line ? `${line} ${word}` : word;
-			if (font.widthOfTextAtSize(next, size) <= room()) line = next;
+			if (widthOf(font, next, size) <= room()) line = next;
 			else {
 				if (line) lines.push(line);
 				const w = room();
-				line = font.widthOfTextAtSize(word, size) <= w ? word : fit(word, font, size, w);
+				line = widthOf(font, word, size) <= w ? word : fit(word, font, size, w);
 			}
 		}
 		lines.push(line);

@@ -7,6 +7,7 @@ import { embedSharedFonts } from './font-cache';
 import type { PdfFonts } from './fonts';
 import { useNativeDeflate } from './native-deflate';
 import { fit, GREY, STOP, wrap } from './layout';
+import { widthOf } from './pdf-text';
 import {
 	ARC_KEYS,
 	atTheArc,
@@ -37,7 +38,7 @@ class ProcedureSheet extends SheetPages {
 		const colW = (this.cw - (cols - 1) * gap) / cols;
 		const layout = (value: string) => {
 			for (let size = 20; size >= 15; size--)
-				if (f.bold.widthOfTextAtSize(value, size) <= colW) return { size, lines: [value] };
+				if (widthOf(f.bold, value, size) <= colW) return { size, lines: [value] };
 			return { size: 15, lines: wrap(value, f.bold, 15, colW).slice(0, 2) };
 		};
 		for (let i = 0; i < items.length; i += cols) {
@@ -166,7 +167,7 @@ class ProcedureSheet extends SheetPages {
 		const width = this.cw - 12;
 		const cautions = t.cautions.map((c) => {
 			const title = `${c.title}:`;
-			const tw = f.bold.widthOfTextAtSize(`${title} `, size);
+			const tw = widthOf(f.bold, `${title} `, size);
 			return { title, tw, lines: wrap(c.text, f.regular, size, width, width - tw) };
 		});
 		const lines = cautions.reduce((n, c) => n + c.lines.length, 0);

@@ -2,6 +2,7 @@
 // still leads to the live revision), the stop banner of a stale sheet, flowing text, footers.
 import type { PDFDocument, PDFFont, PDFPage, RGB } from 'pdf-lib';
 import type { PdfFonts } from './fonts';
+import { drawTextLine, widthOf } from './pdf-text';
 import { drawQr, fit, GREY, INK, PAPER, RULE, STOP, WHITE, wrap } from './layout';
 import { stateBadge, stopLine, UNCONTROLLED, utcText, type SheetInput } from './sheet-content';
 
@@ -28,7 +29,7 @@ export class SheetPages {
 	}
 
 	text(t: string, x: number, y: number, size: number, font: PDFFont, color: RGB = INK) {
-		this.page.drawText(t, { x, y, size, font, color });
+		drawTextLine(this.page, t, x, y, size, font, color);
 	}
 
 	/** A new page: the full header on the first, a compact one with a smaller QR after it. */
@@ -49,10 +50,10 @@ export class SheetPages {
 			y -= 32;
 			const number = fit(s.number, f.bold, 30, tw);
 			const rev = `Revision ${s.rev}`;
-			const nw = f.bold.widthOfTextAtSize(number, 30) + 16;
+			const nw = widthOf(f.bold, number, 30) + 16;
 			this.text(number, M, y, 30, f.bold);
 			// The revision beside the number when both fit, else under it.
-			if (nw + f.bold.widthOfTextAtSize(rev, 22) <= tw) this.text(rev, M + nw, y, 22, f.bold);
+			if (nw + widthOf(f.bold, rev, 22) <= tw) this.text(rev, M + nw, y, 22, f.bold);
 			else this.text(rev, M, (y -= 28), 22, f.bold);
 			y -= 30;
 			this.badge(M, y, tw);
@@ -77,16 +78,16 @@ export class SheetPages {
 		}
 		const capY = top - qr - 11;
 		const cap = 'Scan to check the current revision';
-		this.text(cap, this.w - M - f.bold.widthOfTextAtSize(cap, 8), capY, 8, f.bold, GREY);
+		this.text(cap, this.w - M - widthOf(f.bold, cap, 8), capY, 8, f.bold, GREY);
 		const url = fit(s.url, f.mono, 6.5, Math.max(qr + 40, 200));
-		this.text(url, this.w - M - f.mono.widthOfTextAtSize(url, 6.5), capY - 9, 6.5, f.mono, GREY);
+		this.text(url, this.w - M - widthOf(f.mono, url, 6.5), capY - 9, 6.5, f.mono, GREY);
 		this.y = Math.min(y, capY - 9) - 14;
 		this.banner();
 	}
 
 	badge(x: number, y: number, width: number, size = 13) {
 		const t = fit(stateBadge(this.s), this.f.bold, size, width - 12);
-		const bw = this.f.bold.widthOfTextAtSize(t, size) + 14;
+		const bw = widthOf(this.f.bold, t, size) + 14;
 		this.page.drawRectangle({
 			x,
 			y: y - size * 0.45,
@@ -160,13 +161,7 @@ export class SheetPages {
 		const printed = `Printed ${utcText(this.s.printedAt)}`;
 		this.pages.forEach((p, i) => {
 			const line = (t: string, y: number, font: PDFFont, right = false) =>
-				p.drawText(t, {
-					x: right ? this.w - M - font.widthOfTextAtSize(t, size) : M,
-					y,
-					size,
-					font,
-					color: GREY
-				});
+				drawTextLine(p, t, right ? this.w - M - widthOf(font, t, size) : M, y, size, font, GREY);
 			p.drawLine({
 				start: { x: M, y: M + 22 },
 				end: { x: this.w - M, y: M + 22 },
