@@ -1,6 +1,7 @@
 import { mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { Op } from 'sequelize';
 import { describe, expect, it } from 'vitest';
 
 const dir = mkdtempSync(join(tmpdir(), 'beadline-seed-welders-'));
@@ -46,5 +47,20 @@ describe('demo welders', () => {
 		// Made through the services, so the trail says what the app would have written.
 		for (const action of ['qualification.withdrawn', 'qualification.confirmed'])
 			expect(await AuditEvent.count({ where: { action } })).toBe(1);
+	});
+
+	it('get the withdrawn and ISO 9606-1 qualifications in a demo database seeded before them', async () => {
+		const ids = (
+			await Qualification.findAll({
+				where: { [Op.or]: [{ withdrawnAt: { [Op.ne]: null } }, { code: 'ISO 9606-1' }] }
+			})
+		).map((q) => q.id);
+		expect(ids).toHaveLength(2);
+		await QualificationConfirmation.destroy({ where: { qualificationId: ids } });
+		await Qualification.destroy({ where: { id: ids } });
+		await seedDemo();
+		expect(await Qualification.count({ where: { withdrawnAt: { [Op.ne]: null } } })).toBe(1);
+		expect(await Qualification.count({ where: { code: 'ISO 9606-1' } })).toBe(1);
+		expect(await QualificationConfirmation.count()).toBe(1);
 	});
 });
