@@ -1,5 +1,8 @@
 import { expect, test } from '@playwright/test';
 import { readFile } from 'node:fs/promises';
+import { join } from 'node:path';
+import { openSqlite } from '../scripts/lib/sqlite-file';
+import { DEMO_SHOP } from './support/demo-params';
 import { engineer, otherAdmin, signIn, welder } from './support/people';
 
 // The list, export, compare and plot on the seeded demo records, and who may do what.
@@ -121,4 +124,26 @@ test('a welder cannot create or edit records; another shop gets 404 for the same
 	expect((await o.request.get(`/api/v1/settings/${id}`)).status()).toBe(404);
 	expect((await o.request.get(`/records/${id}/photos/1`)).status()).toBe(404);
 	await o.close();
+});
+
+test('a record a demo procedure cites is frozen: no edit, and its edit URL answers 409', async ({
+	page
+}) => {
+	const db = await openSqlite(join(process.env.E2E_DATA_DIR ?? '', 'beadline.sqlite'), {
+		readonly: true
+	});
+	const cited = await db
+		.get<{ id: number }>(
+			`SELECT r.id FROM settings_records r JOIN shops s ON s.id = r.shop_id
+			 WHERE s.name = ? AND r.cited_by_procedure_id IS NOT NULL ORDER BY r.id LIMIT 1`,
+			[DEMO_SHOP]
+		)
+		.finally(() => db.close());
+	expect(cited, 'the demo seed cites records from its procedures').toBeTruthy();
+	await signIn(page, engineer);
+	await page.goto(`/records/${cited?.id}`);
+	await expect(page.getByTestId('frozen')).toContainText('cites this record');
+	await expect(page.getByRole('link', { name: 'Edit', exact: true })).toHaveCount(0);
+	expect((await page.goto(`/records/${cited?.id}/edit`))?.status()).toBe(409);
+	await expect(page.getByText(/frozen and can no longer be edited/)).toBeVisible();
 });
