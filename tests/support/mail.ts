@@ -34,3 +34,22 @@ export function firstLink(text: string): string {
 	if (!m) throw new Error('No link in mail');
 	return m[0];
 }
+
+/** How many caught messages are addressed to `to`, without waiting (for "no mail was sent"). */
+export async function countMail(to: string): Promise<number> {
+	let files: string[] = [];
+	try {
+		files = readdirSync(dir()).filter((f) => f.endsWith('.eml'));
+	} catch {
+		return 0;
+	}
+	let n = 0;
+	for (const file of files) {
+		const mail = await simpleParser(readFileSync(join(dir(), file)));
+		const rcpt = Array.isArray(mail.to)
+			? mail.to.map((a) => a.text).join(',')
+			: (mail.to?.text ?? '');
+		if (rcpt.includes(to)) n++;
+	}
+	return n;
+}
