@@ -3,6 +3,8 @@
 // sheet spent about a quarter of its time there. pdf-lib looks `deflate` up on pako's module
 // object at each call, so pointing that one function at zlib speeds up every PDF of the process
 // (the qualification card too) without touching pdf-lib. Calls with options keep pako's own.
+// Level 1: a sheet's streams (font subsets, operators) come out about 5 % larger than at the
+// default 6, in about a fifth less time.
 import { createRequire } from 'node:module';
 import { deflateSync } from 'node:zlib';
 
@@ -18,7 +20,7 @@ export function useNativeDeflate(): void {
 		const pako = createRequire(fromHere.resolve('pdf-lib'))('pako') as { deflate: Deflate };
 		const original = pako.deflate;
 		pako.deflate = (data, options) =>
-			options === undefined ? deflateSync(data) : original(data, options);
+			options === undefined ? deflateSync(data, { level: 1 }) : original(data, options);
 	} catch {
 		// No pako where pdf-lib is: pdf-lib keeps compressing the way it does.
 	}
