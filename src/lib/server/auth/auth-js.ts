@@ -55,7 +55,10 @@ export const {
 		})
 	],
 	callbacks: {
-		async signIn({ user }) {
+		async signIn({ user, email }) {
+			// Asking for a link always "succeeds" (sendVerificationRequest mails members only), so
+			// an unknown address sees the member's page; following the link checks the member.
+			if (email?.verificationRequest) return true;
 			return !!(await activeMember(user.email));
 		},
 		async jwt({ token, user }) {
