@@ -1,9 +1,9 @@
 import type { Handle, HandleServerError, ServerInit } from '@sveltejs/kit';
 import { sequence } from '@sveltejs/kit/hooks';
-import { randomBytes } from 'node:crypto';
 import { authHandle } from '$lib/server/auth/auth-js';
 import { currentMember } from '$lib/server/auth/current-member';
 import { migrate } from '$lib/server/db';
+import { publicError } from '$lib/server/public-error';
 import { sweepUploads } from '$lib/server/maintenance/upload-sweep';
 import { startJobTimers } from '$lib/server/jobs/timer';
 import { building } from '$app/environment';
@@ -50,8 +50,5 @@ const member: Handle = async ({ event, resolve }) => {
 
 export const handle = sequence(securityHeaders, authHandle, member);
 
-export const handleError: HandleServerError = ({ error, status, message }) => {
-	const ref = randomBytes(4).toString('hex');
-	if (status >= 500) console.error(`[${ref}]`, error);
-	return { message: status >= 500 ? 'Something went wrong on our side.' : message, ref };
-};
+export const handleError: HandleServerError = ({ error, status, message }) =>
+	publicError(error, status, message);

@@ -12,6 +12,7 @@ import {
 } from '$lib/server/people/profile';
 import { changePasswordSchema, profileSchema } from '$lib/schemas/account';
 import type { Actions, PageServerLoad } from './$types';
+import { postedForm } from '$lib/server/forms/posted-form';
 
 export const load: PageServerLoad = async (event) => {
 	const me = requireMember(event);
@@ -28,7 +29,9 @@ export const load: PageServerLoad = async (event) => {
 export const actions: Actions = {
 	profile: async (event) => {
 		const me = requireMember(event);
-		const form = await superValidate(event.request, zod4(profileSchema), { id: 'profile' });
+		const form = await superValidate(await postedForm(event.request), zod4(profileSchema), {
+			id: 'profile'
+		});
 		if (!form.valid) return fail(400, { form });
 		try {
 			await updateProfile(me, form.data, event);
@@ -41,7 +44,7 @@ export const actions: Actions = {
 	},
 	password: async (event) => {
 		const me = requireMember(event);
-		const form = await superValidate(event.request, zod4(changePasswordSchema), {
+		const form = await superValidate(await postedForm(event.request), zod4(changePasswordSchema), {
 			id: 'password'
 		});
 		const { current, password } = form.data;

@@ -9,6 +9,7 @@ import { User } from '$lib/server/models';
 import { START_PAGE } from '$lib/roles';
 import { linkSignInSchema, signInSchema } from '$lib/schemas/account';
 import type { Actions, PageServerLoad } from './$types';
+import { postedForm } from '$lib/server/forms/posted-form';
 
 // One message for every failure, so the form never tells whether an e-mail has an account.
 const GENERIC = 'That e-mail and password do not match an active account.';
@@ -41,7 +42,7 @@ export const load: PageServerLoad = async ({ locals, url }) => {
 
 export const actions: Actions = {
 	password: async (event) => {
-		const data = await event.request.clone().formData();
+		const data = await postedForm(event.request);
 		const form = await superValidate(data, zod4(signInSchema), { id: 'password' });
 		if (!form.valid) return fail(400, { form });
 		form.data.password = '';
@@ -68,7 +69,7 @@ export const actions: Actions = {
 		return authSignIn(withForm(event, data));
 	},
 	link: async (event) => {
-		const data = await event.request.clone().formData();
+		const data = await postedForm(event.request);
 		const form = await superValidate(data, zod4(linkSignInSchema), { id: 'link' });
 		if (!form.valid) return fail(400, { linkForm: form });
 		if (await formLimiter.isLimited(event)) {

@@ -7,6 +7,7 @@ import { refuseForm } from '$lib/server/people/form-errors';
 import { START_PAGE } from '$lib/roles';
 import { signUpSchema } from '$lib/schemas/account';
 import type { Actions, PageServerLoad } from './$types';
+import { postedForm } from '$lib/server/forms/posted-form';
 
 // Open to anyone by design: this is how a shop first gets onto Beadline. Rate-limited per address.
 
@@ -17,7 +18,9 @@ export const load: PageServerLoad = async ({ locals }) => {
 
 export const actions: Actions = {
 	create: async (event) => {
-		const form = await superValidate(event.request, zod4(signUpSchema), { id: 'signup' });
+		const form = await superValidate(await postedForm(event.request), zod4(signUpSchema), {
+			id: 'signup'
+		});
 		// Passwords never travel back into the page, valid or not.
 		const { password } = form.data;
 		form.data.password = '';

@@ -7,6 +7,7 @@ import { createInvite, listPendingInvites, revokeInvite } from '$lib/server/peop
 import { listPeople } from '$lib/server/people/members';
 import { inviteSchema, revokeInviteSchema } from '$lib/schemas/account';
 import type { Actions, PageServerLoad } from './$types';
+import { postedForm } from '$lib/server/forms/posted-form';
 
 export const load: PageServerLoad = async (event) => {
 	const admin = requireRole(event, 'admin');
@@ -21,7 +22,9 @@ export const load: PageServerLoad = async (event) => {
 export const actions: Actions = {
 	invite: async (event) => {
 		const admin = requireRole(event, 'admin');
-		const form = await superValidate(event.request, zod4(inviteSchema), { id: 'invite' });
+		const form = await superValidate(await postedForm(event.request), zod4(inviteSchema), {
+			id: 'invite'
+		});
 		if (!form.valid) return fail(400, { form });
 		try {
 			const sent = await createInvite(admin, form.data, event);
@@ -37,7 +40,9 @@ export const actions: Actions = {
 	},
 	revokeInvite: async (event) => {
 		const admin = requireRole(event, 'admin');
-		const parsed = revokeInviteSchema.safeParse(Object.fromEntries(await event.request.formData()));
+		const parsed = revokeInviteSchema.safeParse(
+			Object.fromEntries(await postedForm(event.request))
+		);
 		if (!parsed.success) return fail(400, { revokeError: 'That invite is unknown.' });
 		try {
 			const { email } = await revokeInvite(admin, parsed.data.inviteId, event);

@@ -6,6 +6,7 @@ import { refuseForm, rethrowAsHttp } from '$lib/server/people/form-errors';
 import { getShopSettings, updateShopSettings } from '$lib/server/people/shop-settings';
 import { shopSettingsSchema } from '$lib/schemas/account';
 import type { Actions, PageServerLoad } from './$types';
+import { postedForm } from '$lib/server/forms/posted-form';
 
 export const load: PageServerLoad = async (event) => {
 	const admin = requireRole(event, 'admin');
@@ -16,7 +17,9 @@ export const load: PageServerLoad = async (event) => {
 export const actions: Actions = {
 	save: async (event) => {
 		const admin = requireRole(event, 'admin');
-		const form = await superValidate(event.request, zod4(shopSettingsSchema), { id: 'shop' });
+		const form = await superValidate(await postedForm(event.request), zod4(shopSettingsSchema), {
+			id: 'shop'
+		});
 		if (!form.valid) return fail(400, { form });
 		try {
 			await updateShopSettings(admin, form.data, event);

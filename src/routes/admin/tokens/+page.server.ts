@@ -4,6 +4,7 @@ import { createApiToken, listApiTokens, revokeApiToken } from '$lib/server/api/a
 import { requireRole } from '$lib/server/auth/guards';
 import { apiTokenSchema, tokenIdSchema } from '$lib/schemas/account';
 import type { Actions, PageServerLoad } from './$types';
+import { postedForm } from '$lib/server/forms/posted-form';
 
 export const load: PageServerLoad = async (event) => {
 	const admin = requireRole(event, 'admin');
@@ -26,7 +27,7 @@ export const load: PageServerLoad = async (event) => {
 export const actions: Actions = {
 	create: async (event) => {
 		const admin = requireRole(event, 'admin');
-		const form = await superValidate(event, zod4(apiTokenSchema));
+		const form = await superValidate(await postedForm(event.request), zod4(apiTokenSchema));
 		if (!form.valid) return fail(400, { form });
 		const { secret } = await createApiToken(admin, form.data, event);
 		// The secret goes back once in this answer and is never readable again.
@@ -34,7 +35,7 @@ export const actions: Actions = {
 	},
 	revoke: async (event) => {
 		const admin = requireRole(event, 'admin');
-		const parsed = tokenIdSchema.safeParse(Object.fromEntries(await event.request.formData()));
+		const parsed = tokenIdSchema.safeParse(Object.fromEntries(await postedForm(event.request)));
 		if (!parsed.success) return fail(400, { revokeError: 'Unknown token.' });
 		const ok = await revokeApiToken(admin, parsed.data.tokenId, event);
 		if (!ok) return fail(404, { revokeError: 'That token is unknown or already revoked.' });

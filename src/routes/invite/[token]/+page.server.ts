@@ -7,6 +7,7 @@ import { refuseForm } from '$lib/server/people/form-errors';
 import { acceptInvite, findOpenInvite } from '$lib/server/people/invites';
 import { acceptInviteSchema } from '$lib/schemas/account';
 import type { Actions, PageServerLoad } from './$types';
+import { postedForm } from '$lib/server/forms/posted-form';
 
 // Public by design: the person has no account yet; the unguessable token is the permission.
 // Every failure reads the same, so the page tells nothing about any other invite.
@@ -36,7 +37,9 @@ export const load: PageServerLoad = async (event) => {
 
 export const actions: Actions = {
 	accept: async (event) => {
-		const form = await superValidate(event.request, zod4(acceptInviteSchema), { id: 'accept' });
+		const form = await superValidate(await postedForm(event.request), zod4(acceptInviteSchema), {
+			id: 'accept'
+		});
 		const { password } = form.data;
 		form.data.password = '';
 		form.data.confirm = '';

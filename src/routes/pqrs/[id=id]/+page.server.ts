@@ -5,6 +5,7 @@ import { refusal, rethrowAsHttp } from '$lib/server/procedures/form-errors';
 import { addAddendum, certifyPqr, getPqr, MAX_REPORT_BYTES, uploadReport } from '$lib/server/pqrs';
 import { addendumSchema } from '$lib/schemas/pqr';
 import type { Actions, PageServerLoad } from './$types';
+import { postedForm } from '$lib/server/forms/posted-form';
 
 export const load: PageServerLoad = async (event) => {
 	const user = requireRole(event, ...VIEW_ROLES);
@@ -26,7 +27,7 @@ export const actions: Actions = {
 	upload: async (event) => {
 		const user = requireRole(event, ...AUTHOR_ROLES);
 		const id = Number(event.params.id);
-		const file = (await event.request.formData()).get('report');
+		const file = (await postedForm(event.request)).get('report');
 		if (!(file instanceof File) || file.size === 0)
 			return fail(400, { reportError: 'Choose a PDF file.' });
 		if (file.size > MAX_REPORT_BYTES)
@@ -54,7 +55,7 @@ export const actions: Actions = {
 	},
 	addendum: async (event) => {
 		const user = requireRole(event, ...AUTHOR_ROLES);
-		const parsed = addendumSchema.safeParse(Object.fromEntries(await event.request.formData()));
+		const parsed = addendumSchema.safeParse(Object.fromEntries(await postedForm(event.request)));
 		if (!parsed.success)
 			return fail(400, {
 				addendumError: parsed.error.issues[0]?.message ?? 'Write the correction.'

@@ -7,6 +7,7 @@ import { createPqr } from '$lib/server/pqrs';
 import { refuse } from '$lib/server/procedures/form-errors';
 import { pqrFormSchema } from '$lib/schemas/pqr';
 import type { Actions, PageServerLoad } from './$types';
+import { postedForm } from '$lib/server/forms/posted-form';
 
 const schema = zod4(pqrFormSchema);
 
@@ -21,7 +22,7 @@ export const load: PageServerLoad = async (event) => {
 export const actions: Actions = {
 	save: async (event) => {
 		const user = requireRole(event, ...AUTHOR_ROLES);
-		const form = await superValidate(event.request, schema);
+		const form = await superValidate(await postedForm(event.request), schema);
 		if (!form.valid) return fail(400, { form });
 		let id: number;
 		try {

@@ -8,6 +8,7 @@ import { refuse } from '$lib/server/procedures/form-errors';
 import { newProcedureSchema } from '$lib/schemas/procedure';
 import { PROCESSES } from '$lib/records/options';
 import type { Actions, PageServerLoad } from './$types';
+import { postedForm } from '$lib/server/forms/posted-form';
 
 const schema = zod4(newProcedureSchema);
 
@@ -62,7 +63,7 @@ export const load: PageServerLoad = async (event) => {
 export const actions: Actions = {
 	default: async (event) => {
 		const user = requireRole(event, ...AUTHOR_ROLES);
-		const form = await superValidate(event.request, schema);
+		const form = await superValidate(await postedForm(event.request), schema);
 		if (!form.valid) return fail(400, { form });
 		let id: number;
 		try {

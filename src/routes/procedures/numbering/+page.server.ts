@@ -6,6 +6,7 @@ import { applyPattern } from '$lib/server/procedures/numbering';
 import { refuse } from '$lib/server/procedures/form-errors';
 import { numberingSchema } from '$lib/schemas/procedure';
 import type { Actions, PageServerLoad } from './$types';
+import { postedForm } from '$lib/server/forms/posted-form';
 
 const schema = zod4(numberingSchema);
 
@@ -24,7 +25,7 @@ export const load: PageServerLoad = async (event) => {
 export const actions: Actions = {
 	default: async (event) => {
 		const user = requireRole(event, 'admin');
-		const form = await superValidate(event.request, schema);
+		const form = await superValidate(await postedForm(event.request), schema);
 		if (!form.valid) return fail(400, { form });
 		try {
 			await setPatterns(user, form.data, event);

@@ -6,6 +6,7 @@ import { createRecord, CREATE_ROLES, photosFrom } from '$lib/server/records';
 import { refuseRecordForm, type RecordMessage } from '$lib/server/records/form-errors';
 import { settingsRecordSchema } from '$lib/schemas/settings-record';
 import type { Actions, PageServerLoad } from './$types';
+import { postedForm } from '$lib/server/forms/posted-form';
 
 export const load: PageServerLoad = async (event) => {
 	const user = requireRole(event, ...CREATE_ROLES);
@@ -20,7 +21,7 @@ export const load: PageServerLoad = async (event) => {
 export const actions: Actions = {
 	save: async (event) => {
 		const user = requireRole(event, ...CREATE_ROLES);
-		const data = await event.request.formData();
+		const data = await postedForm(event.request);
 		const form = await superValidate<typeof settingsRecordSchema._zod.output, RecordMessage>(
 			data,
 			zod4(settingsRecordSchema),

@@ -15,6 +15,7 @@ import {
 	withdrawQualificationSchema
 } from '$lib/schemas/welder';
 import type { Actions, PageServerLoad } from './$types';
+import { postedForm } from '$lib/server/forms/posted-form';
 
 export const load: PageServerLoad = async (event) => {
 	const user = requireRole(event, ...VIEW_ROLES);
@@ -44,7 +45,9 @@ export const load: PageServerLoad = async (event) => {
 export const actions: Actions = {
 	addUse: async (event) => {
 		const user = requireRole(event, ...MANAGE_ROLES);
-		const form = await superValidate(event.request, zod4(continuitySchema), { id: 'use' });
+		const form = await superValidate(await postedForm(event.request), zod4(continuitySchema), {
+			id: 'use'
+		});
 		if (!form.valid) return fail(400, { form });
 		try {
 			const r = await recordContinuity({
@@ -67,7 +70,9 @@ export const actions: Actions = {
 	},
 	confirm: async (event) => {
 		const user = requireRole(event, ...MANAGE_ROLES);
-		const form = await superValidate(event.request, zod4(confirmationSchema), { id: 'confirm' });
+		const form = await superValidate(await postedForm(event.request), zod4(confirmationSchema), {
+			id: 'confirm'
+		});
 		if (!form.valid) return fail(400, { form });
 		try {
 			await recordConfirmation(user, Number(event.params.id), form.data, event);
@@ -88,7 +93,7 @@ export const actions: Actions = {
 	// One small form beside each qualification, so a plain post: its error names the qualification.
 	withdraw: async (event) => {
 		const user = requireRole(event, ...MANAGE_ROLES);
-		const posted = Object.fromEntries(await event.request.formData());
+		const posted = Object.fromEntries(await postedForm(event.request));
 		const parsed = withdrawQualificationSchema.safeParse(posted);
 		const qualificationId = Number(posted.qualificationId) || null;
 		const reason = typeof posted.reason === 'string' ? posted.reason.slice(0, 500) : '';

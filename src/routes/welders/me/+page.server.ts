@@ -7,6 +7,7 @@ import { welderView } from '$lib/server/welders/read';
 import { welderOfUser } from '$lib/server/welders/welders';
 import { tapSchema } from '$lib/schemas/welder';
 import type { Actions, PageServerLoad } from './$types';
+import { postedForm } from '$lib/server/forms/posted-form';
 
 // "My qualifications": the signed-in member's own welder record, whatever their role.
 export const load: PageServerLoad = async (event) => {
@@ -21,7 +22,7 @@ export const actions: Actions = {
 	// One tap: "I welded with this today". Idempotent, so a double tap changes nothing.
 	tap: async (event) => {
 		const user = requireMember(event);
-		const parsed = tapSchema.safeParse(Object.fromEntries(await event.request.formData()));
+		const parsed = tapSchema.safeParse(Object.fromEntries(await postedForm(event.request)));
 		if (!parsed.success) return fail(400, { tapError: 'Unknown process.' });
 		try {
 			const r = await recordContinuity({

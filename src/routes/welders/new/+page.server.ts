@@ -7,6 +7,7 @@ import { MANAGE_ROLES } from '$lib/server/welders/access';
 import { createWelder, linkableAccounts } from '$lib/server/welders/welders';
 import { welderSchema } from '$lib/schemas/welder';
 import type { Actions, PageServerLoad } from './$types';
+import { postedForm } from '$lib/server/forms/posted-form';
 
 export const load: PageServerLoad = async (event) => {
 	const user = requireRole(event, ...MANAGE_ROLES);
@@ -19,7 +20,7 @@ export const load: PageServerLoad = async (event) => {
 export const actions: Actions = {
 	default: async (event) => {
 		const user = requireRole(event, ...MANAGE_ROLES);
-		const form = await superValidate(event.request, zod4(welderSchema));
+		const form = await superValidate(await postedForm(event.request), zod4(welderSchema));
 		if (!form.valid) return fail(400, { form });
 		let id: number;
 		try {

@@ -14,6 +14,7 @@ import {
 import { ROLE_LABELS } from '$lib/roles';
 import { changeRoleSchema } from '$lib/schemas/account';
 import type { Actions, PageServerLoad } from './$types';
+import { postedForm } from '$lib/server/forms/posted-form';
 
 export const load: PageServerLoad = async (event) => {
 	const admin = requireRole(event, 'admin');
@@ -41,7 +42,9 @@ async function act(run: () => Promise<unknown>, done: string) {
 export const actions: Actions = {
 	changeRole: async (event) => {
 		const admin = requireRole(event, 'admin');
-		const form = await superValidate(event.request, zod4(changeRoleSchema), { id: 'role' });
+		const form = await superValidate(await postedForm(event.request), zod4(changeRoleSchema), {
+			id: 'role'
+		});
 		if (!form.valid) return fail(400, { form });
 		// The form's hidden id must be the page's: a tampered one is simply not this person.
 		if (form.data.userId !== event.params.id)

@@ -8,6 +8,7 @@ import { refuse, rethrowAsHttp } from '$lib/server/procedures/form-errors';
 import { pqrToForm } from '$lib/procedures/pqr-values';
 import { pqrFormSchema } from '$lib/schemas/pqr';
 import type { Actions, PageServerLoad } from './$types';
+import { postedForm } from '$lib/server/forms/posted-form';
 
 const schema = zod4(pqrFormSchema);
 
@@ -33,7 +34,7 @@ export const actions: Actions = {
 	save: async (event) => {
 		const user = requireRole(event, ...AUTHOR_ROLES);
 		const id = Number(event.params.id);
-		const form = await superValidate(event.request, schema);
+		const form = await superValidate(await postedForm(event.request), schema);
 		if (!form.valid) return fail(400, { form });
 		try {
 			await updatePqr(user, id, form.data, event);

@@ -18,6 +18,7 @@ import {
 import { recordTextOf } from '$lib/records/display';
 import { settingsRecordSchema, type SettingsRecordForm } from '$lib/schemas/settings-record';
 import type { Actions, PageServerLoad } from './$types';
+import { postedForm } from '$lib/server/forms/posted-form';
 
 const adapter = zod4(settingsRecordSchema);
 
@@ -42,7 +43,7 @@ export const actions: Actions = {
 		const user = requireRole(event, ...VIEW_ROLES);
 		const id = Number(event.params.id);
 		await requireEditable(user, id).catch(rethrowAsHttp);
-		const data = await event.request.formData();
+		const data = await postedForm(event.request);
 		const form = await superValidate<SettingsRecordForm, RecordMessage>(data, adapter, {
 			id: 'record'
 		});
@@ -58,7 +59,7 @@ export const actions: Actions = {
 		const user = requireRole(event, ...VIEW_ROLES);
 		const id = Number(event.params.id);
 		await requireEditable(user, id).catch(rethrowAsHttp);
-		const photo = Number((await event.request.formData()).get('photo'));
+		const photo = Number((await postedForm(event.request)).get('photo'));
 		if (!Number.isSafeInteger(photo) || photo < 1)
 			return fail(400, { photoError: 'Unknown photo.' });
 		await removePhoto(user, id, photo, event).catch(rethrowAsHttp);

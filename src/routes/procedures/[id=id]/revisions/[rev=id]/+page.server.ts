@@ -12,6 +12,7 @@ import { refusal, rethrowAsHttp } from '$lib/server/procedures/form-errors';
 import { describeRevision, weldersForProcedure } from '$lib/server/welders/procedure-welders';
 import { withdrawSchema } from '$lib/schemas/procedure';
 import type { Actions, PageServerLoad } from './$types';
+import { postedForm } from '$lib/server/forms/posted-form';
 
 const ids = (params: { id: string; rev: string }) =>
 	[Number(params.id), Number(params.rev)] as const;
@@ -49,7 +50,7 @@ export const actions: Actions = {
 	withdraw: async (event) => {
 		const user = requireRole(event, ...AUTHOR_ROLES);
 		const [id, rev] = ids(event.params);
-		const parsed = withdrawSchema.safeParse(Object.fromEntries(await event.request.formData()));
+		const parsed = withdrawSchema.safeParse(Object.fromEntries(await postedForm(event.request)));
 		if (!parsed.success)
 			return fail(400, { withdrawError: parsed.error.issues[0]?.message ?? 'Give a reason.' });
 		try {

@@ -9,6 +9,7 @@ import { addQualification, MAX_RECORD_BYTES } from '$lib/server/welders/qualific
 import { findWelder } from '$lib/server/welders/welders';
 import { qualificationSchema } from '$lib/schemas/welder';
 import type { Actions, PageServerLoad } from './$types';
+import { postedForm } from '$lib/server/forms/posted-form';
 
 export const load: PageServerLoad = async (event) => {
 	const user = requireRole(event, ...MANAGE_ROLES);
@@ -22,7 +23,7 @@ export const load: PageServerLoad = async (event) => {
 export const actions: Actions = {
 	default: async (event) => {
 		const user = requireRole(event, ...MANAGE_ROLES);
-		const data = await event.request.formData();
+		const data = await postedForm(event.request);
 		const form = await superValidate(data, zod4(qualificationSchema));
 		if (!form.valid) return fail(400, { form });
 		const file = data.get('record');

@@ -16,6 +16,7 @@ import { refuse, rethrowAsHttp } from '$lib/server/procedures/form-errors';
 import { variablesToForm } from '$lib/procedures/variables';
 import { revisionFormSchema } from '$lib/schemas/procedure';
 import type { Actions, PageServerLoad } from './$types';
+import { postedForm } from '$lib/server/forms/posted-form';
 
 const schema = zod4(revisionFormSchema);
 
@@ -54,7 +55,7 @@ export const actions: Actions = {
 		const user = requireRole(event, ...AUTHOR_ROLES);
 		const id = Number(event.params.id);
 		const rev = Number(event.params.rev);
-		const form = await superValidate(event.request, schema);
+		const form = await superValidate(await postedForm(event.request), schema);
 		if (!form.valid) return fail(400, { form });
 		try {
 			await updateDraft(user, id, rev, form.data, event);

@@ -12,6 +12,7 @@ import {
 import { refuse, rethrowAsHttp } from '$lib/server/procedures/form-errors';
 import { approveSchema, returnSchema } from '$lib/schemas/procedure';
 import type { Actions, PageServerLoad } from './$types';
+import { postedForm } from '$lib/server/forms/posted-form';
 
 const approve = zod4(approveSchema);
 const giveBack = zod4(returnSchema);
@@ -33,7 +34,7 @@ export const load: PageServerLoad = async (event) => {
 export const actions: Actions = {
 	approve: async (event) => {
 		const user = requireRole(event, ...REVIEW_ROLES);
-		const form = await superValidate(event.request, approve, { id: 'approve' });
+		const form = await superValidate(await postedForm(event.request), approve, { id: 'approve' });
 		const id = Number(event.params.id);
 		const rev = Number(event.params.rev);
 		if (!form.valid) {
@@ -53,7 +54,7 @@ export const actions: Actions = {
 	},
 	return: async (event) => {
 		const user = requireRole(event, ...REVIEW_ROLES);
-		const form = await superValidate(event.request, giveBack, { id: 'return' });
+		const form = await superValidate(await postedForm(event.request), giveBack, { id: 'return' });
 		if (!form.valid) return fail(400, { form });
 		const id = Number(event.params.id);
 		const rev = Number(event.params.rev);
