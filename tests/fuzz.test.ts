@@ -154,6 +154,10 @@ async function send(
 				'../../x.png'
 			);
 		body = payload.urlencoded ? new URLSearchParams(payload.fields) : form;
+		if (payload.broken) {
+			headers['content-type'] = 'multipart/form-data; boundary=never-sent';
+			body = payload.fields.flat().join('&') || 'not multipart';
+		}
 	} else {
 		headers['content-type'] = payload.contentType;
 		body = payload.text;
@@ -177,7 +181,15 @@ async function send(
 }
 
 type Payload =
-	| { kind: 'form'; fields: [string, string][]; html: boolean; urlencoded: boolean; file?: string }
+	| {
+			kind: 'form';
+			fields: [string, string][];
+			html: boolean;
+			urlencoded: boolean;
+			file?: string;
+			/** Claims multipart but is not: a broken client or a hand-made request. */
+			broken?: boolean;
+	  }
 	| { kind: 'json'; text: string; contentType: string };
 
 function payloads(route: AppRoute, names: string[]): fc.Arbitrary<Payload> {
@@ -187,7 +199,8 @@ function payloads(route: AppRoute, names: string[]): fc.Arbitrary<Payload> {
 				fields: formFields(names),
 				html: fc.boolean(),
 				urlencoded: fc.boolean(),
-				file: fc.option(fc.constantFrom(...(names.length ? names : ['file'])), { nil: undefined })
+				file: fc.option(fc.constantFrom(...(names.length ? names : ['file'])), { nil: undefined }),
+				broken: fc.integer({ min: 0, max: 9 }).map((n) => n === 0) // one in ten
 			})
 			.map((p) => ({ kind: 'form' as const, ...p }));
 	const shaped = API_SCHEMAS[route.key] ? fromSchema(API_SCHEMAS[route.key]!) : hostileJson;
