@@ -7,16 +7,13 @@ const dir = mkdtempSync(join(tmpdir(), 'beadline-procedures-'));
 process.env.DATABASE_FILE = join(dir, 'test.sqlite');
 process.env.UPLOADS_DIR = join(dir, 'uploads');
 
-const { sequelize } = await import('../db');
-const { AuditEvent, Procedure, ProcedureRevision, SettingsRecord, SignOff, User } =
-	await import('../models');
-const { ForbiddenError, NotFoundError, RefusedError } = await import('../people/errors');
+const { Procedure, ProcedureRevision, SettingsRecord, SignOff } = await import('../models');
+const { NotFoundError, RefusedError } = await import('../people/errors');
 const { settingsRecordSchema } = await import('$lib/schemas/settings-record');
 const { createRecord } = await import('../records/save');
 const { certifyPqr, createPqr } = await import('../pqrs');
 const svc = await import('./index');
 const T = await import('./test-support');
-const { clearFailures } = await import('../auth/failed-sign-ins');
 
 type People = Awaited<ReturnType<typeof T.shopWithPeople>>;
 let a: People, b: People;
@@ -27,26 +24,9 @@ beforeAll(async () => {
 	b = await T.shopWithPeople('Other Procedure Shop');
 });
 
-async function draft(people = a, n = Math.random().toString(36).slice(2, 7)) {
-	const { id } = await svc.createProcedure(people.engineer, {
-		number: `WPS-${n}`,
-		title: 'GTAW fillet',
-		code: 'aws-d1.1',
-		process: 'GTAW',
-		recordIds: []
-	});
-	await svc.updateDraft(people.engineer, id, 1, T.revisionForm());
-	return id;
-}
-
-async function inReview(people = a) {
-	const id = await draft(people);
-	await svc.submitRevision(people.engineer, id, 1, null, quiet);
-	return id;
-}
-
-const state = async (procedureId: number, rev: number) =>
-	(await ProcedureRevision.findOne({ where: { procedureId, rev } }))?.state;
+const draft = (people = a) => T.draftProcedure(people);
+const inReview = (people = a) => T.procedureInReview(people);
+const state = T.revisionState;
 
 describe('the revision life', () => {
 	it('goes draft → in review → returned with a comment → resubmitted → approved, frozen once signed', async () => {
@@ -170,153 +150,6 @@ describe('the revision life', () => {
 		await certifyPqr(a.engineer, pqrId);
 		await svc.submitRevision(a.engineer, id, 1, null, quiet);
 		expect(await state(id, 1)).toBe('in-review');
-	});
-});
-
-describe('signing', () => {
-	it('gives exactly one success to 20 concurrent approvals by two inspectors', async () => {
-		const id = await inReview();
-		const results = await Promise.allSettled(
-			Array.from({ length: 20 }, (_, i) =>
-				svc.approveRevision(
-					i % 2 ? a.inspector : a.inspector2,
-					id,
-					1,
-					{ password: T.PASSWORD, comment: '' },
-					null,
-					quiet
-				)
-			)
-		);
-		const ok = results.filter((r) => r.status === 'fulfilled');
-		const refused = results.filter((r) => r.status === 'rejected') as PromiseRejectedResult[];
-		expect(ok).toHaveLength(1);
-		expect(refused.every((r) => r.reason instanceof svc.AlreadyDecidedError)).toBe(true);
-		const rev = await ProcedureRevision.findOne({ where: { procedureId: id, rev: 1 } });
-		expect(await SignOff.count({ where: { revisionId: rev!.id } })).toBe(1);
-	});
-
-	it('does not sign with a wrong password, and records the attempt', async () => {
-		const id = await inReview();
-		await expect(
-			svc.approveRevision(a.inspector, id, 1, { password: 'not it', comment: '' }, null, quiet)
-		).rejects.toThrow(svc.WRONG_PASSWORD);
-		expect(await state(id, 1)).toBe('in-review');
-		const rev = await ProcedureRevision.findOne({ where: { procedureId: id, rev: 1 } });
-		expect(await SignOff.count({ where: { revisionId: rev!.id } })).toBe(0);
-		expect(
-			await AuditEvent.count({
-				where: { objectId: String(rev!.id), action: 'procedure_revision.signature_refused' }
-			})
-		).toBe(1);
-	});
-
-	it('stops taking passwords after ten wrong ones, even the right one, and signs nothing', async () => {
-		const id = await inReview();
-		const wrong = () =>
-			svc.approveRevision(a.inspector, id, 1, { password: 'not it', comment: '' }, null, quiet);
-		clearFailures(a.inspector.email);
-		try {
-			for (let i = 0; i < 9; i++) await expect(wrong()).rejects.toThrow(svc.WRONG_PASSWORD);
-			// The tenth is the last one the limit takes (the same ten as at sign-in).
-			await expect(wrong()).rejects.toThrow(svc.TOO_MANY_PASSWORDS);
-			await expect(
-				svc.approveRevision(a.inspector, id, 1, { password: T.PASSWORD, comment: '' }, null, quiet)
-			).rejects.toThrow(svc.TOO_MANY_PASSWORDS);
-			expect(await state(id, 1)).toBe('in-review');
-		} finally {
-			clearFailures(a.inspector.email);
-		}
-	});
-
-	it('lets neither a welder nor an engineer approve, nor an author given inspector rights by mistake', async () => {
-		const id = await inReview();
-		for (const who of [a.welder, a.engineer, a.admin])
-			await expect(
-				svc.approveRevision(who, id, 1, { password: T.PASSWORD, comment: '' }, null, quiet)
-			).rejects.toThrow(ForbiddenError);
-		await User.update({ role: 'inspector' }, { where: { id: a.engineer.id } });
-		try {
-			const asInspector = { ...a.engineer, role: 'inspector' as const };
-			await expect(
-				svc.approveRevision(asInspector, id, 1, { password: T.PASSWORD, comment: '' }, null, quiet)
-			).rejects.toThrow(svc.OWN_WORK);
-			expect((await svc.getRevision(asInspector, id, 1)).can.decide).toBe(false);
-		} finally {
-			await User.update({ role: 'engineer' }, { where: { id: a.engineer.id } });
-		}
-		expect(await state(id, 1)).toBe('in-review');
-	});
-
-	it('detects a signed revision changed behind the app, and writes it to the trail', async () => {
-		const id = await inReview();
-		await svc.approveRevision(
-			a.inspector,
-			id,
-			1,
-			{ password: T.PASSWORD, comment: '' },
-			null,
-			quiet
-		);
-		const view = await svc.getRevision(a.engineer, id, 1);
-		expect(view.integrity).toMatchObject({ signed: true, ok: true });
-		expect(await svc.revisionDigest(view.revision.id)).toMatchObject({ matches: true });
-		const row = await ProcedureRevision.findByPk(view.revision.id);
-		const doc = JSON.parse(row!.variables);
-		doc.electrical.amps.max = 180;
-		await sequelize.query('UPDATE procedure_revisions SET variables = ? WHERE id = ?', {
-			replacements: [JSON.stringify(doc), view.revision.id]
-		});
-		const after = await svc.getRevision(a.engineer, id, 1);
-		expect(after.integrity.ok).toBe(false);
-		expect(after.integrity.computedDigest).not.toBe(after.integrity.signedDigest);
-		expect(await svc.revisionDigest(view.revision.id)).toMatchObject({ matches: false });
-		expect(
-			await AuditEvent.count({
-				where: { objectId: String(view.revision.id), action: 'procedure_revision.tamper_detected' }
-			})
-		).toBe(1);
-		// The signature rows themselves cannot be rewritten (a trigger refuses it).
-		await expect(
-			sequelize.query("UPDATE sign_offs SET printed_name = 'Someone Else'")
-		).rejects.toThrow();
-		expect(await SignOff.count({ where: { printedName: 'Someone Else' } })).toBe(0);
-	});
-
-	it('checks each signed revision the diff shows, and writes a mismatch to the trail', async () => {
-		const id = await inReview();
-		await svc.approveRevision(
-			a.inspector,
-			id,
-			1,
-			{ password: T.PASSWORD, comment: '' },
-			null,
-			quiet
-		);
-		const { rev } = await svc.startRevision(a.engineer, id);
-		const clean = await svc.diffRevisions(a.engineer, id, rev, 1);
-		expect(clean.b).toMatchObject({ rev: 1, integrity: { signed: true, ok: true } });
-		expect(clean.a.integrity.signed).toBe(false);
-		const row = await ProcedureRevision.findOne({ where: { procedureId: id, rev: 1 } });
-		await sequelize.query(
-			'UPDATE procedure_revisions SET variables = replace(variables, \'"max":135\', \'"max":185\') WHERE id = ?',
-			{ replacements: [row!.id] }
-		);
-		const tamperEvents = () =>
-			AuditEvent.count({
-				where: { objectId: String(row!.id), action: 'procedure_revision.tamper_detected' }
-			});
-		const seen = await svc.diffRevisions(a.engineer, id, rev, 1);
-		expect(seen.b.integrity.ok).toBe(false);
-		expect(seen.b.integrity.problems).toContain(
-			'The revision as stored now differs from what was signed.'
-		);
-		expect(seen.a.integrity.ok).toBe(true);
-		expect(await tamperEvents()).toBe(1);
-		// Either side: revision 1 against itself is one view, one event.
-		const same = await svc.diffRevisions(a.engineer, id, 1, 1);
-		expect(same.a.integrity.ok).toBe(false);
-		expect(await tamperEvents()).toBe(2);
 	});
 });
 

@@ -1,11 +1,12 @@
 // Helpers for the procedure and PQR services' tests only. Import after DATABASE_FILE is set.
 import { hashPassword } from '../auth/password';
 import { migrate } from '../db';
-import { User } from '../models';
+import { ProcedureRevision, User } from '../models';
 import { asSessionUser, newShop, uniqueEmail } from '../people/test-support';
 import type { PqrForm } from '$lib/schemas/pqr';
 import { pqrFormSchema } from '$lib/schemas/pqr';
 import { revisionFormSchema, type RevisionForm } from '$lib/schemas/procedure';
+import { createProcedure, submitRevision, updateDraft } from './index';
 
 export const PASSWORD = 'signing password 42';
 
@@ -83,3 +84,28 @@ export const pqrForm = (over: Partial<Record<keyof PqrForm, unknown>> = {}): Pqr
 		tensile2: '71800',
 		...over
 	});
+
+type People = Awaited<ReturnType<typeof shopWithPeople>>;
+
+/** A GTAW procedure of the shop with revision 1 filled in as a draft. */
+export async function draftProcedure(people: People): Promise<number> {
+	const { id } = await createProcedure(people.engineer, {
+		number: `WPS-${Math.random().toString(36).slice(2, 7)}`,
+		title: 'GTAW fillet',
+		code: 'aws-d1.1',
+		process: 'GTAW',
+		recordIds: []
+	});
+	await updateDraft(people.engineer, id, 1, revisionForm());
+	return id;
+}
+
+/** ... and submitted for review (no mail sent). */
+export async function procedureInReview(people: People): Promise<number> {
+	const id = await draftProcedure(people);
+	await submitRevision(people.engineer, id, 1, null, { notify: false });
+	return id;
+}
+
+export const revisionState = async (procedureId: number, rev: number) =>
+	(await ProcedureRevision.findOne({ where: { procedureId, rev } }))?.state;
