@@ -10,6 +10,9 @@ import { RateLimiter } from 'sveltekit-rate-limiter/server';
 import { write } from '../db';
 import { BoothLookup } from '../models';
 import type { LookupOutcome } from '../models/booth-link';
+import { LOOKUP_WINDOW_MS } from './lookup-window';
+
+export { LOOKUP_WINDOW_MS };
 
 function perMinute(name: string, fallback: number): number {
 	const n = Number(process.env[name]);
@@ -29,12 +32,9 @@ function addressOf(event: RequestEvent): string | null {
 	}
 }
 
-/**
- * One row per link and outcome per window, whichever process served the scan: a 50-tap burst
- * on one sheet is one row that counts 50. Unknown and limited lookups have no link, so their
- * rows are per address instead (someone walking the token space shows up as one address).
- */
-export const LOOKUP_WINDOW_MS = 10 * 60_000;
+// One row per link and outcome per window (LOOKUP_WINDOW_MS), whichever process served the scan:
+// a 50-tap burst on one sheet is one row that counts 50. Unknown and limited lookups have no
+// link, so their rows are per address instead (someone walking the token space is one address).
 
 type Entry = Omit<InferCreationAttributes<BoothLookup>, 'id'> & {
 	bucket: string;
