@@ -6,6 +6,7 @@ import { mkdir, readdir, rename, stat } from 'node:fs/promises';
 import { join } from 'node:path';
 import { QueryTypes } from 'sequelize';
 import { config } from '../config';
+import { keyColumns } from '../db/dialect';
 import { sequelize } from '../db/sequelize';
 
 /** The storage keys of src/lib/server/storage, and their temporary names while being written. */
@@ -16,11 +17,7 @@ export const ORPHANED_DIR = 'orphaned';
 
 /** Every storage key the database names: any `*_key` column, the convention storage keys use. */
 export async function referencedKeys(): Promise<Set<string>> {
-	const cols = await sequelize.query<{ t: string; c: string }>(
-		`SELECT m.name AS t, p.name AS c FROM sqlite_master m, pragma_table_info(m.name) p
-		 WHERE m.type = 'table' AND p.name LIKE '%\\_key' ESCAPE '\\'`,
-		{ type: QueryTypes.SELECT }
-	);
+	const cols = await keyColumns(sequelize);
 	const keys = new Set<string>();
 	for (const { t, c } of cols) {
 		const rows = await sequelize.query<{ k: unknown }>(
