@@ -11,7 +11,11 @@ let chosen: { signature: string; backend: Promise<StorageBackend> } | null = nul
 export async function backendFromEnv(): Promise<StorageBackend> {
 	const kind = config.storage;
 	if (kind === 'local') return new LocalStorage(config.uploadsDir);
-	throw new ConfigError(`STORAGE is "${kind}"; it must be "local" (the default).`);
+	if (kind === 's3') {
+		const { s3FromEnv } = await import('./s3');
+		return s3FromEnv();
+	}
+	throw new ConfigError(`STORAGE is "${kind}"; it must be "local" (the default) or "s3".`);
 }
 
 /** The process's back end (one client, reused). */
