@@ -20,6 +20,8 @@ export interface S3Fake {
 export async function startS3Fake(
 	opts: { bucket?: string; buckets?: string[]; directory?: string } = {}
 ): Promise<S3Fake> {
+	// The SDK's notice that its 2027 releases need Node 22 is true, but noise in every test run.
+	process.env.AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED ??= 'true';
 	const bucket = opts.bucket ?? 'beadline-test';
 	const directory = opts.directory ?? mkdtempSync(join(tmpdir(), 'beadline-s3-'));
 	const server = new S3rver({
@@ -43,7 +45,6 @@ export async function startS3Fake(
 			S3_ACCESS_KEY_ID: FAKE_KEY,
 			S3_SECRET_ACCESS_KEY: FAKE_KEY,
 			S3_FORCE_PATH_STYLE: 'true',
-			// The SDK's notice that its 2027 releases need Node 22: true, but noise in every test.
 			AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: 'true'
 		},
 		async close() {
