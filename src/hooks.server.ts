@@ -8,6 +8,7 @@ import { sweepUploads } from '$lib/server/maintenance/upload-sweep';
 import { orExit } from '$lib/server/config-error';
 import { checkStorage } from '$lib/server/storage/select';
 import { startJobTimers } from '$lib/server/jobs/timer';
+import { closeOnShutdown } from '$lib/server/shutdown';
 import { building } from '$app/environment';
 
 export const init: ServerInit = async () => {
@@ -19,6 +20,7 @@ export const init: ServerInit = async () => {
 	if (!building) await sweepUploads(new Date(Date.now() - process.uptime() * 1000));
 	// The hourly lapse-notice run; never while building (BEADLINE_JOBS=off leaves it to cron).
 	if (!building) startJobTimers();
+	if (!building) closeOnShutdown();
 };
 
 const securityHeaders: Handle = async ({ event, resolve }) => {

@@ -37,13 +37,15 @@ const spread = () => c.apps.map((a) => `${a.name} ${answered(a.backend)}`).join(
 
 test.beforeAll(async () => {
 	test.setTimeout(180_000);
+	const t = Date.now();
 	c = await startCluster(3);
 	for (const p of [engineer, inspector, welder])
 		cookies[p.email] = await signInCookie(c.proxy.origin, p.email, p.password);
-	console.log(`[multi] configuration: ${c.configuration}`);
+	console.log(`[multi] configuration: ${c.configuration}; up in ${Date.now() - t} ms`);
 });
 
 test.afterAll(async () => {
+	test.setTimeout(60_000);
 	await c?.dispose();
 });
 

@@ -1,8 +1,8 @@
 // Several processes of the built app on one database and one upload store, behind the
 // round-robin proxy: what a host running Beadline for many shops would run. The database and
-// the store come from the environment of the test run:
-//   MULTI_DATABASE=sqlite (one WAL file; default) | postgres (DATABASE_URL of a running server)
-//   MULTI_STORAGE=local (one uploads folder; default) | s3
+// the store (see sharedStores):
+//   MULTI_DATABASE=postgres (default: a throw-away cluster) | sqlite (one WAL file)
+//   MULTI_STORAGE=s3 (default: s3rver on a free port) | local (one uploads folder)
 import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
 import { randomBytes } from 'node:crypto';
 import { mkdtempSync, readdirSync, readFileSync, rmSync } from 'node:fs';
@@ -11,6 +11,8 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { simpleParser } from 'mailparser';
 import type { SMTPServer } from 'smtp-server';
+import { startPostgres } from '../../scripts/lib/postgres';
+import { startS3Fake } from '../../scripts/lib/s3-fake';
 import { startMailCatcher } from '../../src/lib/server/mail/catcher';
 import { openAnyDatabase, type AnyDatabase } from './any-database';
 import { startProxy, type Backend, type Proxy } from './round-robin-proxy';
@@ -58,36 +60,47 @@ async function healthy(origin: string, timeoutMs: number): Promise<void> {
 	throw new Error(`${origin} did not come up in ${timeoutMs} ms`);
 }
 
-/** Where the shared state lives: the SQLite file and uploads folder, or what the environment names. */
+/**
+ * Where the shared state lives. The target of a hosted install, and the default: a throw-away
+ * PostgreSQL (scripts/lib/postgres.ts) and an s3rver bucket (scripts/lib/s3-fake.ts).
+ * MULTI_DATABASE=sqlite and MULTI_STORAGE=local run the same test on one SQLite file and one
+ * uploads folder instead.
+ */
 async function sharedStores(dataDir: string): Promise<{
 	env: Record<string, string>;
 	label: string;
 	stop: () => Promise<void>;
 }> {
-	const database = process.env.MULTI_DATABASE ?? 'sqlite';
-	const storage = process.env.MULTI_STORAGE ?? 'local';
+	const database = process.env.MULTI_DATABASE ?? 'postgres';
+	const storage = process.env.MULTI_STORAGE ?? 's3';
 	const env: Record<string, string> = {};
 	const labels: string[] = [];
+	const stops: (() => Promise<void>)[] = [];
 	if (database === 'postgres') {
-		if (!process.env.DATABASE_URL?.startsWith('postgres'))
-			throw new Error(
-				'MULTI_DATABASE=postgres needs DATABASE_URL=postgres://… of an empty database'
-			);
-		env.DATABASE_URL = process.env.DATABASE_URL;
-		labels.push(`PostgreSQL (${new URL(env.DATABASE_URL).host})`);
+		const pg = await startPostgres();
+		stops.push(() => pg.stop());
+		env.DATABASE_URL = await pg.createDatabase('beadline_multi');
+		labels.push(`PostgreSQL (a throw-away cluster, ${new URL(pg.url).host})`);
 	} else {
 		env.DATABASE_FILE = join(dataDir, 'beadline.sqlite');
 		labels.push('one SQLite file (WAL, busy timeout)');
 	}
 	if (storage === 's3') {
-		for (const k of Object.keys(process.env).filter((k) => k.startsWith('S3_') || k === 'STORAGE'))
-			env[k] = process.env[k]!;
-		labels.push(`an S3 bucket (${env.S3_ENDPOINT ?? 'AWS'})`);
+		const s3 = await startS3Fake();
+		stops.push(() => s3.close());
+		Object.assign(env, s3.env);
+		labels.push(`an s3rver bucket (${s3.endpoint})`);
 	} else {
 		env.UPLOADS_DIR = join(dataDir, 'uploads');
 		labels.push('one local uploads folder');
 	}
-	return { env, label: labels.join(' + '), stop: async () => {} };
+	return {
+		env,
+		label: labels.join(' + '),
+		stop: async () => {
+			for (const stop of stops.reverse()) await stop();
+		}
+	};
 }
 
 export async function startCluster(n = 3): Promise<Cluster> {
@@ -107,6 +120,8 @@ export async function startCluster(n = 3): Promise<Cluster> {
 		ORIGIN: proxy.origin,
 		HOST: '127.0.0.1',
 		BODY_SIZE_LIMIT: '80M',
+		// adapter-node waits this long for open keep-alive connections at SIGTERM (default 30 s).
+		SHUTDOWN_TIMEOUT: '2',
 		// The jobs tick every half second in every process, so each process tries them.
 		BEADLINE_JOBS: 'on',
 		BEADLINE_JOBS_INTERVAL_MS: '500',
@@ -171,19 +186,29 @@ export async function startCluster(n = 3): Promise<Cluster> {
 			app.child = null;
 		},
 		async dispose() {
-			await Promise.all(
-				apps.map(async (a) => {
-					const child = a.child;
-					if (!child || child.exitCode !== null) return;
-					const gone = new Promise((r) => child.once('exit', r));
-					child.kill('SIGTERM');
-					await gone;
-				})
+			const step = async (what: string, work: () => Promise<unknown>) => {
+				const t = Date.now();
+				await work();
+				if (process.env.MULTI_DEBUG) console.log(`[multi] dispose: ${what} ${Date.now() - t} ms`);
+			};
+			await step('processes', () =>
+				Promise.all(
+					apps.map(async (a) => {
+						const child = a.child;
+						if (!child || child.exitCode !== null || child.signalCode) return;
+						const gone = new Promise((r) => child.once('exit', r));
+						child.kill('SIGTERM');
+						// A process that does not stop within its shutdown timeout is killed.
+						const late = setTimeout(() => child.kill('SIGKILL'), 5_000);
+						await gone;
+						clearTimeout(late);
+					})
+				)
 			);
-			await db.close();
-			await proxy.close();
-			await new Promise((r) => catcher.close(() => r(undefined)));
-			await stores.stop();
+			await step('database connection', () => db.close());
+			await step('proxy', () => proxy.close());
+			await step('mail catcher', () => new Promise((r) => catcher.close(() => r(undefined))));
+			await step('stores', () => stores.stop());
 			rmSync(dataDir, { recursive: true, force: true });
 		}
 	};

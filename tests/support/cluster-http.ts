@@ -3,11 +3,15 @@
 import type { Cluster } from './app-cluster';
 
 /** Polls `probe` until it answers something truthy, for at most `ms`. */
-export async function until<T>(what: string, probe: () => Promise<T>, ms = 20_000): Promise<T> {
+export async function until<T>(
+	what: string,
+	probe: () => Promise<T>,
+	ms = 20_000
+): Promise<NonNullable<T>> {
 	const end = Date.now() + ms;
 	for (;;) {
 		const v = await probe();
-		if (v) return v;
+		if (v) return v as NonNullable<T>;
 		if (Date.now() > end) throw new Error(`Timed out after ${ms} ms waiting for ${what}`);
 		await new Promise((r) => setTimeout(r, 100));
 	}

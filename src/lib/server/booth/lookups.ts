@@ -59,23 +59,26 @@ export async function flushLookups(): Promise<void> {
 	pending = new Map();
 	if (!batch.length) return;
 	try {
-		await write(async (t) => {
-			await BoothLookup.bulkCreate(
-				batch.map((e) => ({ ...e, hits: 0, lastAt: null })),
-				{ ignoreDuplicates: true, transaction: t }
-			);
-			for (const e of batch) {
-				const where = { bucket: e.bucket, windowStart: e.windowStart };
-				await BoothLookup.increment({ hits: e.hits }, { where, transaction: t });
-				await BoothLookup.update(
-					{ lastAt: e.lastAt },
-					{
-						where: { ...where, [Op.or]: [{ lastAt: null }, { lastAt: { [Op.lt]: e.lastAt } }] },
-						transaction: t
-					}
+		await write(
+			async (t) => {
+				await BoothLookup.bulkCreate(
+					batch.map((e) => ({ ...e, hits: 0, lastAt: null })),
+					{ ignoreDuplicates: true, transaction: t }
 				);
-			}
-		});
+				for (const e of batch) {
+					const where = { bucket: e.bucket, windowStart: e.windowStart };
+					await BoothLookup.increment({ hits: e.hits }, { where, transaction: t });
+					await BoothLookup.update(
+						{ lastAt: e.lastAt },
+						{
+							where: { ...where, [Op.or]: [{ lastAt: null }, { lastAt: { [Op.lt]: e.lastAt } }] },
+							transaction: t
+						}
+					);
+				}
+			},
+			{ atomicStatements: true }
+		);
 	} catch (e) {
 		const n = batch.reduce((sum, b) => sum + b.hits, 0);
 		console.error(`${n} booth lookups not logged`, e);

@@ -6,10 +6,13 @@
 // expired window, insert the key if it is missing (INSERT OR IGNORE on SQLite, ON CONFLICT DO
 // NOTHING on PostgreSQL, both through Sequelize's `ignoreDuplicates`), add one with
 // `hits = hits + 1`. Two processes hitting one key at once both count: the second insert is
-// ignored, and the increments queue on the row.
+// ignored, and the increments queue on the row (READ COMMITTED on PostgreSQL: see ATOMIC).
 import { Op, type Transaction } from 'sequelize';
 import { WindowCounter } from '../models';
 import { write } from './write-queue';
+
+/** Every step below is right on its own under concurrency (write-queue.ts, WriteOptions). */
+const ATOMIC = { atomicStatements: true };
 
 /** Counts one hit on `key` and answers the hits in its window so far, this one included. */
 export function hit(key: string, windowMs: number, now = Date.now()): Promise<number> {
@@ -22,7 +25,7 @@ export function hit(key: string, windowMs: number, now = Date.now()): Promise<nu
 		await WindowCounter.increment('hits', { by: 1, where: { key }, transaction: t });
 		const row = await WindowCounter.findByPk(key, { transaction: t });
 		return row?.hits ?? 1;
-	});
+	}, ATOMIC);
 }
 
 /** The hits on `key` in a window that is still open at `now`; 0 when there is none. */
@@ -38,12 +41,13 @@ export async function hits(key: string, now = Date.now()): Promise<number> {
 export async function reset(key: string, opts: { prefix?: boolean } = {}): Promise<number> {
 	if (!opts.prefix && !(await WindowCounter.findByPk(key))) return 0;
 	const where = opts.prefix ? { key: { [Op.startsWith]: key } } : { key };
-	return write((t) => WindowCounter.destroy({ where, transaction: t }));
+	return write((t) => WindowCounter.destroy({ where, transaction: t }), ATOMIC);
 }
 
 /** Removes windows that ended before `now`, so keys sprayed once do not pile up. */
 export function sweepCounters(now = Date.now()): Promise<number> {
-	return write((t) =>
-		WindowCounter.destroy({ where: { windowEnd: { [Op.lt]: now } }, transaction: t })
+	return write(
+		(t) => WindowCounter.destroy({ where: { windowEnd: { [Op.lt]: now } }, transaction: t }),
+		ATOMIC
 	);
 }

@@ -9,6 +9,9 @@ import { Op } from 'sequelize';
 import { write } from '../db';
 import { JobLease } from '../models';
 
+/** One conditional update: right under concurrency on its own (db/write-queue.ts, WriteOptions). */
+const ATOMIC = { atomicStatements: true };
+
 /** This process, as the lease rows name it. */
 export const PROCESS_HOLDER = `${hostname().slice(0, 60)}:${process.pid}:${randomUUID().slice(0, 8)}`;
 
@@ -29,7 +32,7 @@ export function takeLease(
 			{ where: { name, [Op.or]: [{ leaseUntil: { [Op.lt]: now } }, { holder }] }, transaction: t }
 		);
 		return taken === 1;
-	});
+	}, ATOMIC);
 }
 
 /** Gives the lease back after a run and counts the run; a lease lost meanwhile is left alone. */
@@ -38,7 +41,7 @@ export function releaseLease(name: string, holder = PROCESS_HOLDER): Promise<voi
 		const where = { name, holder };
 		await JobLease.increment('runs', { by: 1, where, transaction: t });
 		await JobLease.update({ leaseUntil: 0, lastRunAt: new Date() }, { where, transaction: t });
-	});
+	}, ATOMIC);
 }
 
 /** Runs `job` if this process gets the lease; null when another process holds it. */

@@ -27,24 +27,31 @@ export async function runJobsOnce(now = () => new Date()): Promise<void> {
 }
 
 let started = false;
+let timers: ReturnType<typeof setTimeout>[] = [];
+
+let running: Promise<void> | null = null;
+
+/**
+ * At shutdown: no new run starts, and a run under way gets up to `graceMs` to finish and give
+ * its lease back (past that the lease runs out by itself).
+ */
+export async function stopJobTimers(graceMs = 5_000): Promise<void> {
+	for (const t of timers) clearTimeout(t);
+	timers = [];
+	if (running) await Promise.race([running, new Promise((r) => setTimeout(r, graceMs).unref())]);
+}
 
 export function startJobTimers(): void {
 	if (started || process.env.BEADLINE_JOBS === 'off') return;
 	started = true;
 	const every = intervalMs();
-	let busy = false;
 	const tick = async () => {
-		if (busy) return;
-		busy = true;
-		try {
-			await runJobsOnce();
-		} catch (e) {
-			console.error('[jobs] scheduled jobs failed', e);
-		} finally {
-			busy = false;
-		}
+		if (running) return;
+		running = runJobsOnce()
+			.catch((e) => console.error('[jobs] scheduled jobs failed', e))
+			.finally(() => (running = null));
+		await running;
 	};
 	// unref(): the timers never keep a stopping process alive.
-	setTimeout(tick, Math.min(30_000, every)).unref();
-	setInterval(tick, every).unref();
+	timers = [setTimeout(tick, Math.min(30_000, every)).unref(), setInterval(tick, every).unref()];
 }
