@@ -13,11 +13,11 @@ if (refusal) {
 	process.exit(1);
 }
 
-const { migrate, sequelize } = await import('../src/lib/server/db');
+const { exitOnConfigError, migrate, sequelize } = await import('../src/lib/server/db');
 const { seedDemo } = await import('../src/lib/server/seed/seed-demo');
 const { orExit } = await import('../src/lib/server/config-error');
 const { checkStorage, closeStorage } = await import('../src/lib/server/storage/select');
-await migrate();
+await migrate().catch(exitOnConfigError);
 // The demo's photos and reports go to the store: a bad bucket stops here with one sentence.
 await orExit(checkStorage);
 const { shop, other } = await seedDemo();

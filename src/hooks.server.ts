@@ -2,7 +2,7 @@ import type { Handle, HandleServerError, ServerInit } from '@sveltejs/kit';
 import { sequence } from '@sveltejs/kit/hooks';
 import { authHandle } from '$lib/server/auth/auth-js';
 import { currentMember } from '$lib/server/auth/current-member';
-import { migrate } from '$lib/server/db';
+import { exitOnConfigError, migrate } from '$lib/server/db';
 import { publicError } from '$lib/server/public-error';
 import { sweepUploads } from '$lib/server/maintenance/upload-sweep';
 import { orExit } from '$lib/server/config-error';
@@ -11,7 +11,8 @@ import { startJobTimers } from '$lib/server/jobs/timer';
 import { building } from '$app/environment';
 
 export const init: ServerInit = async () => {
-	await migrate();
+	// A bad DATABASE_URL or an unreachable database stops start-up with one sentence, no stack.
+	await migrate().catch(exitOnConfigError);
 	// A bucket that is missing or refuses the credentials stops start-up with one sentence.
 	if (!building) await orExit(checkStorage);
 	// After a crash: unfinished and unreferenced uploads move aside before any request is served.

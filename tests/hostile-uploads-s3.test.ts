@@ -84,6 +84,6 @@ test('a missing bucket stops the server with one sentence naming S3_BUCKET', asy
 	const status = await new Promise<number | null>((resolve) => child.once('exit', resolve));
 	expect(status).toBe(1);
 	expect(stderr.trim()).toBe(
-		`Beadline cannot start: S3_BUCKET "not-there" does not exist at ${fake.endpoint}.`
+		`S3_BUCKET "not-there" does not exist at ${fake.endpoint}.`
 	);
 });

@@ -1,4 +1,5 @@
 import { resolve } from 'node:path';
+import { parseDatabaseUrl, type DatabaseTarget } from './db/database-url';
 
 // One place that reads the environment. Plain process.env (not $env) so the same modules run
 // under the app, under vitest and under the command-line scripts in scripts/.
@@ -8,8 +9,16 @@ function read(name: string, fallback: string): string {
 }
 
 export const config = {
+	/** DATABASE_URL (postgres://… or sqlite:…); unset means the SQLite file of DATABASE_FILE. */
+	get database(): DatabaseTarget {
+		return parseDatabaseUrl(process.env.DATABASE_URL, process.env.DATABASE_FILE);
+	},
+	/** The SQLite file in use (DATABASE_URL=sqlite:… or DATABASE_FILE), for the SQLite-only tools. */
 	get databaseFile() {
-		return resolve(read('DATABASE_FILE', './data/beadline.sqlite'));
+		const db = this.database;
+		return db.kind === 'sqlite'
+			? db.file
+			: resolve(read('DATABASE_FILE', './data/beadline.sqlite'));
 	},
 	get dataDir() {
 		return resolve(read('DATA_DIR', './data'));

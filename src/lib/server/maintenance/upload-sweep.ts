@@ -4,6 +4,7 @@
 // Nothing is deleted: such files move to orphaned/<start>/ (UPLOADS_DIR/orphaned/ or the bucket's
 // orphaned/ prefix), out of the storage tree. Goes through the storage interface, never sharp.
 import { QueryTypes } from 'sequelize';
+import { keyColumns } from '../db/dialect';
 import { sequelize } from '../db/sequelize';
 import type { StorageBackend } from '../storage/backend';
 import { storage } from '../storage/select';
@@ -21,11 +22,7 @@ export const ORPHANED_DIR = 'orphaned';
 
 /** Every storage key the database names: any `*_key` column, the convention storage keys use. */
 export async function referencedKeys(): Promise<Set<string>> {
-	const cols = await sequelize.query<{ t: string; c: string }>(
-		`SELECT m.name AS t, p.name AS c FROM sqlite_master m, pragma_table_info(m.name) p
-		 WHERE m.type = 'table' AND p.name LIKE '%\\_key' ESCAPE '\\'`,
-		{ type: QueryTypes.SELECT }
-	);
+	const cols = await keyColumns(sequelize);
 	const keys = new Set<string>();
 	for (const { t, c } of cols) {
 		const rows = await sequelize.query<{ k: unknown }>(
