@@ -10,6 +10,8 @@ CREATE INDEX `booth_links_shop_id_revision_id` ON `booth_links` (`shop_id`, `rev
 
 CREATE UNIQUE INDEX `booth_links_token` ON `booth_links` (`token`);
 
+CREATE UNIQUE INDEX `booth_lookups_bucket_window_start` ON `booth_lookups` (`bucket`, `window_start`);
+
 CREATE INDEX `booth_lookups_link_id_at` ON `booth_lookups` (`link_id`, `at`);
 
 CREATE INDEX `booth_lookups_shop_id_at` ON `booth_lookups` (`shop_id`, `at`);
@@ -98,6 +100,8 @@ CREATE UNIQUE INDEX `welders_shop_id_stamp` ON `welders` (`shop_id`, `stamp`);
 
 CREATE UNIQUE INDEX `welders_user_id` ON `welders` (`user_id`);
 
+CREATE INDEX `window_counters_window_end` ON `window_counters` (`window_end`);
+
 CREATE TABLE `accounts` (`id` UUID PRIMARY KEY, `type` VARCHAR(255) NOT NULL, `provider` VARCHAR(255) NOT NULL, `provider_account_id` VARCHAR(255) NOT NULL, `refresh_token` VARCHAR(255), `access_token` VARCHAR(255), `expires_at` INTEGER, `token_type` VARCHAR(255), `scope` VARCHAR(255), `id_token` TEXT, `session_state` VARCHAR(255), `user_id` UUID REFERENCES `users` (`id`) ON DELETE CASCADE);
 
 CREATE TABLE `api_tokens` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `name` VARCHAR(80) NOT NULL, `role` VARCHAR(20) NOT NULL, `token_hash` VARCHAR(64) NOT NULL UNIQUE, `prefix` VARCHAR(16) NOT NULL, `created_by_id` UUID NOT NULL REFERENCES `users` (`id`), `last_used_at` DATETIME, `revoked_at` DATETIME, `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL);
@@ -106,11 +110,13 @@ CREATE TABLE `audit_events` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` I
 
 CREATE TABLE `booth_links` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `procedure_id` INTEGER NOT NULL REFERENCES `procedures` (`id`), `revision_id` INTEGER NOT NULL REFERENCES `procedure_revisions` (`id`), `token` VARCHAR(40) NOT NULL, `issued_at` DATETIME NOT NULL, `issued_by_id` UUID REFERENCES `users` (`id`), `revoked_at` DATETIME, `revoked_by_id` UUID REFERENCES `users` (`id`), `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL);
 
-CREATE TABLE `booth_lookups` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER REFERENCES `shops` (`id`), `link_id` INTEGER REFERENCES `booth_links` (`id`), `outcome` VARCHAR(12) NOT NULL, `user_id` UUID REFERENCES `users` (`id`), `ip` VARCHAR(64), `user_agent` VARCHAR(300), `at` DATETIME NOT NULL);
+CREATE TABLE `booth_lookups` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER REFERENCES `shops` (`id`), `link_id` INTEGER REFERENCES `booth_links` (`id`), `outcome` VARCHAR(12) NOT NULL, `user_id` UUID REFERENCES `users` (`id`), `ip` VARCHAR(64), `user_agent` VARCHAR(300), `at` DATETIME NOT NULL, `bucket` VARCHAR(120), `window_start` BIGINT, `hits` INTEGER NOT NULL DEFAULT 1, `last_at` DATETIME);
 
 CREATE TABLE `continuity_entries` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `welder_id` INTEGER NOT NULL REFERENCES `welders` (`id`), `process` VARCHAR(8) NOT NULL, `used_on` DATE NOT NULL, `source` VARCHAR(8) NOT NULL, `note` VARCHAR(500), `recorded_by_id` UUID REFERENCES `users` (`id`), `recorded_by_name` VARCHAR(120) NOT NULL, `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL);
 
 CREATE TABLE `invites` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `email` VARCHAR(254) NOT NULL, `name` VARCHAR(120) NOT NULL, `role` VARCHAR(20) NOT NULL, `token_hash` VARCHAR(64) NOT NULL UNIQUE, `expires_at` DATETIME NOT NULL, `used_at` DATETIME, `invited_by_id` UUID NOT NULL REFERENCES `users` (`id`), `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL);
+
+CREATE TABLE `job_leases` (`name` VARCHAR(60) NOT NULL PRIMARY KEY, `holder` VARCHAR(120) NOT NULL DEFAULT '', `lease_until` BIGINT NOT NULL DEFAULT 0, `runs` INTEGER NOT NULL DEFAULT 0, `last_run_at` DATETIME);
 
 CREATE TABLE `lapse_notices` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `qualification_id` INTEGER NOT NULL REFERENCES `qualifications` (`id`), `lapses_on` DATE NOT NULL, `kind` VARCHAR(8) NOT NULL, `recipients` TEXT NOT NULL DEFAULT '', `sent_at` DATETIME, `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL);
 
@@ -157,6 +163,8 @@ CREATE TABLE `verification_links` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop
 CREATE TABLE `verification_tokens` (`token` VARCHAR(255) PRIMARY KEY, `identifier` VARCHAR(255) NOT NULL, `expires` DATETIME NOT NULL);
 
 CREATE TABLE `welders` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `name` VARCHAR(120) NOT NULL, `stamp` VARCHAR(20) NOT NULL, `user_id` UUID REFERENCES `users` (`id`), `email` VARCHAR(254), `active` TINYINT(1) NOT NULL DEFAULT 1, `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL);
+
+CREATE TABLE `window_counters` (`key` VARCHAR(320) NOT NULL PRIMARY KEY, `hits` INTEGER NOT NULL DEFAULT 0, `window_end` BIGINT NOT NULL);
 
 CREATE TRIGGER audit_events_no_delete BEFORE DELETE ON audit_events
 		BEGIN SELECT RAISE(ABORT, 'audit events are append-only'); END;
