@@ -1,6 +1,5 @@
 import type { Handle, HandleServerError, RequestEvent, ServerInit } from '@sveltejs/kit';
 import { sequence } from '@sveltejs/kit/hooks';
-import { authHandle } from '$lib/server/auth/auth-js';
 import { currentMember } from '$lib/server/auth/current-member';
 import { migrate } from '$lib/server/db';
 import { publicError } from '$lib/server/public-error';
@@ -39,8 +38,12 @@ const FIRST_PAINT_FONTS =
  * Auth.js itself only where a session begins or ends: its own routes under /auth (the e-mail
  * link's callback, sign-out, its CSRF token). The sign-in and sign-out actions call it directly.
  */
-const authJs: Handle = ({ event, resolve }) =>
-	event.url.pathname.startsWith('/auth/') ? authHandle({ event, resolve }) : resolve(event);
+const authJs: Handle = async ({ event, resolve }) => {
+	if (!event.url.pathname.startsWith('/auth/')) return resolve(event);
+	// Loaded at the first such request: a process that only serves pages never holds Auth.js.
+	const { authHandle } = await import('$lib/server/auth/auth-js');
+	return authHandle({ event, resolve });
+};
 
 /** Requests no session can change: health, Kit's static files, and API calls with a token. */
 function sessionless(event: RequestEvent): boolean {

@@ -3,7 +3,7 @@
 import { randomBytes } from 'node:crypto';
 import { mkdir, readFile, rename, rm, stat, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
-import sharp, { type OutputInfo } from 'sharp';
+import type { OutputInfo } from 'sharp';
 import { config } from '../config';
 import { EXTENSIONS, sniff, type UploadKind } from './sniff';
 
@@ -83,6 +83,8 @@ export async function saveUpload(bytes: Uint8Array, options: SaveOptions): Promi
 	}
 	let image: { data: Buffer; info: OutputInfo };
 	let thumb: Buffer;
+	// sharp (libvips: tens of MB resident) loads at the first image, not at start-up.
+	const { default: sharp } = await import('sharp');
 	try {
 		const base = sharp(bytes, { failOn: 'error', limitInputPixels: 80_000_000 })
 			.rotate()
