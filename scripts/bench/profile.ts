@@ -1,4 +1,4 @@
-// npm run bench:profile [-- --seconds 5 --records 10000 --out DIR]
+// node --import tsx scripts/bench/profile.ts [--seconds 5 --records 10000 --out DIR]
 // Where a request's time goes: the built server runs under `node --cpu-prof` on a throw-away
 // seeded database, each hot route is loaded in turn, and the server's CPU profile is summed by
 // function (self time) and printed as a top list. The .cpuprofile files stay in the out folder
