@@ -1,9 +1,11 @@
 // The list's query: filters and sort from the URL, always inside the actor's shop. The indexes
 // of migrations 0003 and 0007 lead with shop_id and cover each filter and sort.
-import { Op, Sequelize, type Order, type WhereOptions } from 'sequelize';
+import { Op, type Order, type WhereOptions } from 'sequelize';
 import { parseLength, type UnitSystem } from '$lib/weld';
 import type { RecordFilterInput } from '$lib/schemas/settings-record';
 import type { SessionUser } from '../auth/session-user';
+import { sequelize } from '../db/sequelize';
+import { unindexedTerm } from '../db/dialect';
 import { SettingsRecord } from '../models';
 import { authorNames } from './choices';
 import { searchTerms } from './search';
@@ -21,13 +23,13 @@ export interface ResolvedFilters {
 type Attr = keyof SettingsRecord['_attributes'];
 
 /**
- * A filter term. `inOrder` writes it as `+column`, which SQLite will not look up in an index,
+ * A filter term. `inOrder` writes it as `+column` (dialect.ts), which SQLite will not look up in an index,
  * so the query walks the sort's index and stops at the page (see walkInOrder).
  */
 function term(attr: Attr, value: unknown, inOrder: boolean): WhereOptions<SettingsRecord> {
 	if (!inOrder) return { [attr]: value } as WhereOptions<SettingsRecord>;
 	const field = SettingsRecord.getAttributes()[attr]?.field ?? String(attr);
-	return Sequelize.where(Sequelize.literal(`+"${field}"`), value as never) as never;
+	return unindexedTerm<SettingsRecord>(sequelize, field, value);
 }
 
 export function resolveFilters(

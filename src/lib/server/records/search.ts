@@ -1,6 +1,7 @@
 // The list's text search, from migration 0009's index: every word must appear somewhere in the
 // record's search text, as a substring (what LIKE '%word%' gave, without reading every row).
 import { Op, Sequelize, type WhereOptions } from 'sequelize';
+import { isPostgres } from '../db/dialect';
 import { sequelize } from '../db/sequelize';
 import type { SettingsRecord } from '../models';
 
@@ -16,7 +17,7 @@ const phrase = (w: string) => `"${w.replace(/"/g, '""')}"`;
 
 export function searchTerms(q: string): WhereOptions<SettingsRecord>[] {
 	const words = searchWords(q);
-	if (sequelize.getDialect() === 'postgres') {
+	if (isPostgres(sequelize)) {
 		// pg_trgm's GIN index serves ILIKE (migration 0009).
 		return words.map((w) => ({ searchText: { [Op.iLike]: `%${w}%` } }));
 	}

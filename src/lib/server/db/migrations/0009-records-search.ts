@@ -1,4 +1,5 @@
 import type { QueryInterface } from 'sequelize';
+import { isPostgres } from '../dialect';
 
 // Settings records' text search from an index, and a per-shop version of the records for caches.
 // SQLite: an FTS5 table over search_text with the trigram tokenizer (substring matches, as the
@@ -78,9 +79,8 @@ const POSTGRES_DOWN = [
 	'DROP INDEX settings_records_search_trgm'
 ];
 
-// Until the dialect module (src/lib/server/db/dialect.ts) is on main, branch here.
 const statements = (q: QueryInterface, sqlite: string[], postgres: string[]) =>
-	q.sequelize.getDialect() === 'postgres' ? postgres : sqlite;
+	isPostgres(q) ? postgres : sqlite;
 
 export async function up({ context: q }: { context: QueryInterface }) {
 	for (const sql of statements(q, SQLITE_UP, POSTGRES_UP)) await q.sequelize.query(sql);
