@@ -54,7 +54,7 @@ describe('the cached member', () => {
 		expect(await memberFor(w.id, 1)).toMatchObject({ role: 'welder' });
 		await elsewhere('UPDATE users SET role = ? WHERE id = ?', ['admin', w.id]);
 		expect(await memberFor(w.id, 1)).toMatchObject({ role: 'admin' });
-		await elsewhere('UPDATE users SET active = 0 WHERE id = ?', [w.id]);
+		await elsewhere('UPDATE users SET active = ? WHERE id = ?', [false, w.id]);
 		expect(await memberFor(w.id, 1)).toBeNull();
 	});
 
