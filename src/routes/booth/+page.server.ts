@@ -2,9 +2,6 @@ import { requireMember } from '$lib/server/auth/guards';
 import { currentBoothLinks } from '$lib/server/booth';
 import type { PageServerLoad } from './$types';
 
-// No JavaScript: the welder's start page is links only, read on a phone on a weak connection.
-export const csr = false;
-
 // Every member may stand at a booth: any role reads a posted procedure.
 export const load: PageServerLoad = async (event) => {
 	const user = requireMember(event);
