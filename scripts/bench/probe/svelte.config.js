@@ -6,7 +6,10 @@ import adapter from '@sveltejs/adapter-node';
 /** @type {import('@sveltejs/kit').Config} */
 export default {
 	kit: {
-		adapter: adapter({ out: process.env.PROBE_OUT ?? 'build' }),
-		outDir: process.env.PROBE_KIT_DIR ?? '.svelte-kit'
+		// Under node_modules by default too, so no tool ever leaves Kit's files in the repository.
+		adapter: adapter({
+			out: process.env.PROBE_OUT ?? '../../../node_modules/.cache/beadline-probe/build'
+		}),
+		outDir: process.env.PROBE_KIT_DIR ?? '../../../node_modules/.cache/beadline-probe/kit'
 	}
 };
