@@ -45,5 +45,13 @@ export default ts.config(
 				{ argsIgnorePattern: '^_', varsIgnorePattern: '^_' }
 			]
 		}
+	},
+	{
+		// SvelteKit keeps the service worker out of the app's tsconfig (it runs with the webworker
+		// library, not the DOM): it has a tsconfig of its own.
+		files: ['src/service-worker.ts'],
+		languageOptions: {
+			parserOptions: { projectService: false, project: './tsconfig.worker.json' }
+		}
 	}
 );

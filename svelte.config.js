@@ -18,6 +18,8 @@ const config = {
 				tsconfig.include.push('../reference/**/*.ts', '../scripts/**/*.ts', '../*.config.ts');
 			}
 		},
+		// Registered by the app shell for signed-in members only (src/lib/components/AppShell.svelte).
+		serviceWorker: { register: false },
 		alias: {
 			$reference: 'reference'
 		},
@@ -30,6 +32,8 @@ const config = {
 				'img-src': ['self', 'data:', 'blob:'],
 				'font-src': ['self'],
 				'connect-src': ['self'],
+				'worker-src': ['self'],
+				'manifest-src': ['self'],
 				'media-src': ['self', 'blob:'],
 				'object-src': ['none'],
 				'base-uri': ['self'],
