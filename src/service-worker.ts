@@ -151,13 +151,18 @@ async function offline(path: string, member: string | null, justQueued: boolean)
 	const queued = member ? (await waiting(member)).length : 0;
 	const top =
 		(member ? noticesBanner(await takeNotices(member)) : '') + queueBanner(queued, justQueued);
+	const shell = await caches.open(SHELL);
+	if (SHELL_PAGES.includes(path) && path !== '/offline') {
+		const page = await shell.match(path);
+		if (page) return page;
+	}
 	const kept = member ? await keptCopy(member, path) : null;
 	if (kept) {
 		const savedAt = new Date(kept.headers.get(SAVED_AT_HEADER) ?? Date.now());
 		const html = prependToBody(stripScripts(await kept.text()), offlineBanner(savedAt) + top);
 		return new Response(html, { status: 200, headers: kept.headers });
 	}
-	const page = await (await caches.open(SHELL)).match('/offline');
+	const page = await shell.match('/offline');
 	if (!page)
 		return new Response('Offline, and this page is not on this phone.', {
 			status: 503,

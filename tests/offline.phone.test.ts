@@ -230,3 +230,25 @@ test('sign-out clears what the phone kept: nothing is readable offline after it'
 	}
 	await context.close();
 });
+
+test('a shared phone: the next person never sees the last person’s kept pages', async ({
+	browser
+}) => {
+	const { context, page } = await phone(browser, server);
+	await signIn(page, welder);
+	await controlled(page);
+	const path = `/b/${await boothTokenOn(server, 'WPS-001', 2)}`;
+	await page.goto(path);
+	// The welder's session ends without a sign-out here (it expired, or "sign out everywhere").
+	await context.clearCookies();
+	await signIn(page, engineer);
+	await page.goto('/booth');
+	await context.setOffline(true);
+	await page.goto(path);
+	await expect(page.getByRole('heading', { name: 'Not on this phone' })).toBeVisible();
+	await page.goto('/booth');
+	// The engineer's own copy of the booth page, not the welder's.
+	await expect(page.getByTestId('offline-banner')).toBeVisible();
+	await expect(page.getByTestId('whoami')).toContainText('Reuben');
+	await context.close();
+});
