@@ -49,6 +49,11 @@ test('the manifest and the service worker register with no console errors; the a
 	await page.goto('/booth');
 	await page.goto(`/b/${await boothTokenOn(server, 'WPS-002', 1)}`);
 	expect(errors).toEqual([]);
+	// One shell, this deployment's: an older one is deleted when its successor takes over.
+	const shells = await page.evaluate(async () =>
+		(await caches.keys()).filter((k) => k.startsWith('shell-'))
+	);
+	expect(shells).toHaveLength(1);
 	await context.close();
 });
 
