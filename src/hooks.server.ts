@@ -1,6 +1,7 @@
 import type { Handle, HandleServerError, RequestEvent, ServerInit } from '@sveltejs/kit';
 import { sequence } from '@sveltejs/kit/hooks';
 import { currentMember } from '$lib/server/auth/current-member';
+import { MEMBER_HEADER, memberKey } from '$lib/server/auth/member-key';
 import { exitOnConfigError, migrate } from '$lib/server/db';
 import { publicError } from '$lib/server/public-error';
 import { sweepUploads } from '$lib/server/maintenance/upload-sweep';
@@ -67,6 +68,8 @@ const member: Handle = async ({ event, resolve }) => {
 	if (event.locals.user && !response.headers.has('Cache-Control')) {
 		response.headers.set('Cache-Control', 'private, no-store');
 	}
+	// Tells the service worker whose pages it may keep on this phone (none when signed out).
+	if (event.locals.user) response.headers.set(MEMBER_HEADER, memberKey(event.locals.user.id));
 	return response;
 };
 

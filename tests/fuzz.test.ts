@@ -111,9 +111,10 @@ async function current() {
 	return snapshot;
 }
 
-/** Logs a refusal may append to: the audit trail (a refused signature is recorded on purpose)
- * and the booth view's lookup log (a page shown again after a refused tap is a lookup). */
-const APPEND_ONLY_LOGS = ['audit_events', 'booth_lookups'];
+/** Logs a refusal may append to: the audit trail (a refused signature is recorded on purpose),
+ * the booth view's lookup log (a page shown again after a refused tap is a lookup) and the taps
+ * received from phones (a refused tap is kept, so its retry gets the same answer). */
+const APPEND_ONLY_LOGS = ['audit_events', 'booth_lookups', 'continuity_taps'];
 
 /** What a refused request committed beyond those logs: the names of the tables it changed. */
 async function changedBy(before: NonNullable<typeof snapshot>): Promise<string[]> {

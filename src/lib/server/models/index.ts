@@ -73,3 +73,5 @@ export {
 	VerificationLink,
 	Welder
 } from './welders';
+
+export { ContinuityTap } from './continuity-tap';

@@ -18,6 +18,8 @@ CREATE INDEX `continuity_entries_shop_id_welder_id_used_on` ON `continuity_entri
 
 CREATE UNIQUE INDEX `continuity_entries_welder_id_process_used_on` ON `continuity_entries` (`welder_id`, `process`, `used_on`);
 
+CREATE INDEX `continuity_taps_shop_id_received_at` ON `continuity_taps` (`shop_id`, `received_at`);
+
 CREATE UNIQUE INDEX `lapse_notices_qualification_id_lapses_on_kind` ON `lapse_notices` (`qualification_id`, `lapses_on`, `kind`);
 
 CREATE INDEX `pqr_addenda_shop_id_pqr_id` ON `pqr_addenda` (`shop_id`, `pqr_id`);
@@ -109,6 +111,8 @@ CREATE TABLE `booth_links` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` IN
 CREATE TABLE `booth_lookups` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER REFERENCES `shops` (`id`), `link_id` INTEGER REFERENCES `booth_links` (`id`), `outcome` VARCHAR(12) NOT NULL, `user_id` UUID REFERENCES `users` (`id`), `ip` VARCHAR(64), `user_agent` VARCHAR(300), `at` DATETIME NOT NULL);
 
 CREATE TABLE `continuity_entries` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `welder_id` INTEGER NOT NULL REFERENCES `welders` (`id`), `process` VARCHAR(8) NOT NULL, `used_on` DATE NOT NULL, `source` VARCHAR(8) NOT NULL, `note` VARCHAR(500), `recorded_by_id` UUID REFERENCES `users` (`id`), `recorded_by_name` VARCHAR(120) NOT NULL, `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL);
+
+CREATE TABLE "continuity_taps" (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `user_id` UUID NOT NULL REFERENCES `users` (`id`), `client_id` VARCHAR(64) NOT NULL, `link_id` INTEGER REFERENCES `booth_links` (`id`), `continuity_entry_id` INTEGER REFERENCES `continuity_entries` (`id`), `outcome` VARCHAR(12) NOT NULL, `message` VARCHAR(300), `made_at` DATETIME NOT NULL, `received_at` DATETIME NOT NULL, CONSTRAINT `continuity_taps_user_client_unique` UNIQUE (`user_id`, `client_id`));
 
 CREATE TABLE `invites` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `email` VARCHAR(254) NOT NULL, `name` VARCHAR(120) NOT NULL, `role` VARCHAR(20) NOT NULL, `token_hash` VARCHAR(64) NOT NULL UNIQUE, `expires_at` DATETIME NOT NULL, `used_at` DATETIME, `invited_by_id` UUID NOT NULL REFERENCES `users` (`id`), `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL);
 
