@@ -111,8 +111,9 @@ async function current() {
 	return snapshot;
 }
 
-/** Logs a refusal may append to: the audit trail (a refused signature is recorded on purpose). */
-const APPEND_ONLY_LOGS = ['audit_events'];
+/** Logs a refusal may append to: the audit trail (a refused signature is recorded on purpose)
+ * and the taps received from phones (a refused tap is kept, so its retry gets the same answer). */
+const APPEND_ONLY_LOGS = ['audit_events', 'continuity_taps'];
 /** Counts a refusal may move: the booth view's lookup log (a page shown again after a refused
  * tap is a lookup, counted in its window's row) and the rate and failed-sign-in counters. */
 const COUNTERS = ['booth_lookups', 'window_counters'];

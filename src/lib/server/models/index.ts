@@ -76,3 +76,5 @@ export {
 	VerificationLink,
 	Welder
 } from './welders';
+
+export { ContinuityTap } from './continuity-tap';
