@@ -3,7 +3,7 @@
 // the store (see sharedStores):
 //   MULTI_DATABASE=postgres (default: a throw-away cluster) | sqlite (one WAL file)
 //   MULTI_STORAGE=s3 (default: s3rver on a free port) | local (one uploads folder)
-import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
+import { spawn, type ChildProcess } from 'node:child_process';
 import { randomBytes } from 'node:crypto';
 import { mkdtempSync, readdirSync, readFileSync, rmSync } from 'node:fs';
 import { createServer } from 'node:net';
@@ -15,6 +15,7 @@ import { startPostgres } from '../../scripts/lib/postgres';
 import { startS3Fake } from '../../scripts/lib/s3-fake';
 import { startMailCatcher } from '../../src/lib/server/mail/catcher';
 import { openAnyDatabase, type AnyDatabase } from './any-database';
+import { prepareData } from './own-server';
 import { startProxy, type Backend, type Proxy } from './round-robin-proxy';
 
 export function freePort(): Promise<number> {
@@ -129,11 +130,7 @@ export async function startCluster(n = 3): Promise<Cluster> {
 		FORM_LIMIT_IP_PER_MINUTE: '100000',
 		BOOTH_LIMIT_IP_PER_MINUTE: '100000'
 	};
-	const prep = spawnSync(process.execPath, ['--import', 'tsx', 'tests/support/prepare-data.ts'], {
-		env,
-		encoding: 'utf8'
-	});
-	if (prep.status !== 0) throw new Error(`Preparing the shared database failed: ${prep.stderr}`);
+	await prepareData(env, 'the shared database');
 	const catcher: SMTPServer = await startMailCatcher({ port: smtpPort, dir: mailDir });
 	const buildDir = process.env.BUILD_DIR ?? 'build';
 
