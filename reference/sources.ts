@@ -230,8 +230,9 @@ export const AWG_ALUMINIUM: Source = {
 
 export const BWG_TUBE: Source = {
 	label: 'Birmingham Wire Gauge (BWG) for tube wall',
-	edition: 'recalled tube-wall values',
-	kind: 'from memory'
+	edition:
+		"Holtzapffel's measured BWG table (Mechanical Manipulation, reprinted at chestofbooks.com) and the Engineering ToolBox BWG table; gauges 8-26 agree with both",
+	kind: 'published'
 };
 
 export const POLARITY_PRACTICE: Source = {

@@ -123,7 +123,7 @@ export type CodeRule =
 /** The rule the governing code gives a variable, or a plain "no rule modelled". */
 export function codeRule(code: unknown, variable: unknown, process?: unknown): CodeRule {
 	const c = normaliseCode(code);
-	const v = typeof variable === 'string' ? variable.slice(0, 40) : String(variable).slice(0, 40);
+	const v = typeof variable === 'string' ? variable.slice(0, 40) : '(not a variable name)';
 	if (c === null)
 		return {
 			modelled: false,
