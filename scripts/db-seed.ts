@@ -13,9 +13,9 @@ if (refusal) {
 	process.exit(1);
 }
 
-const { migrate, sequelize } = await import('../src/lib/server/db');
+const { exitOnConfigError, migrate, sequelize } = await import('../src/lib/server/db');
 const { seedDemo } = await import('../src/lib/server/seed/seed-demo');
-await migrate();
+await migrate().catch(exitOnConfigError);
 const { shop, other } = await seedDemo();
 console.log(`Seeded ${shop.name} and ${other.name}.`);
 await sequelize.close();

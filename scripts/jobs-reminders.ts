@@ -1,6 +1,6 @@
 // npm run jobs:reminders — the lapse warnings once, for cron (the server also runs them hourly).
 // --date=YYYY-MM-DD runs them as of another day (tests, or catching up by hand).
-import { migrate, sequelize } from '../src/lib/server/db';
+import { exitOnConfigError, migrate, sequelize } from '../src/lib/server/db';
 import { runLapseReminders } from '../src/lib/server/jobs/lapse-reminders';
 
 const arg = process.argv.find((a) => a.startsWith('--date='));
@@ -10,7 +10,7 @@ if (Number.isNaN(now.getTime())) {
 	process.exit(2);
 }
 
-await migrate();
+await migrate().catch(exitOnConfigError);
 const run = await runLapseReminders(now);
 console.log(
 	JSON.stringify({

@@ -30,8 +30,8 @@ export function stackEnv({ dataDir, port, smtpPort }: StackEnv): NodeJS.ProcessE
 }
 
 export async function prepareDatabase(opts: { seed: boolean }): Promise<void> {
-	const { migrate, sequelize } = await import('../../src/lib/server/db');
-	await migrate();
+	const { exitOnConfigError, migrate, sequelize } = await import('../../src/lib/server/db');
+	await migrate().catch(exitOnConfigError);
 	if (opts.seed) {
 		const { seedDemo } = await import('../../src/lib/server/seed/seed-demo');
 		await seedDemo();

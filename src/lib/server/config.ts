@@ -1,4 +1,5 @@
 import { resolve } from 'node:path';
+import { parseDatabaseUrl, type DatabaseTarget } from './db/database-url';
 
 // One place that reads the environment. Plain process.env (not $env) so the same modules run
 // under the app, under vitest and under the command-line scripts in scripts/.
@@ -8,14 +9,37 @@ function read(name: string, fallback: string): string {
 }
 
 export const config = {
+	/** DATABASE_URL (postgres://… or sqlite:…); unset means the SQLite file of DATABASE_FILE. */
+	get database(): DatabaseTarget {
+		return parseDatabaseUrl(process.env.DATABASE_URL, process.env.DATABASE_FILE);
+	},
+	/** The SQLite file in use (DATABASE_URL=sqlite:… or DATABASE_FILE), for the SQLite-only tools. */
 	get databaseFile() {
-		return resolve(read('DATABASE_FILE', './data/beadline.sqlite'));
+		const db = this.database;
+		return db.kind === 'sqlite'
+			? db.file
+			: resolve(read('DATABASE_FILE', './data/beadline.sqlite'));
 	},
 	get dataDir() {
 		return resolve(read('DATA_DIR', './data'));
 	},
 	get uploadsDir() {
 		return resolve(read('UPLOADS_DIR', './data/uploads'));
+	},
+	/** STORAGE: `local` (the default, UPLOADS_DIR) or `s3` (the S3_* variables). */
+	get storage() {
+		return read('STORAGE', 'local').toLowerCase();
+	},
+	/** Raw S3 settings; storage/s3-settings.ts checks them. Credentials may also be AWS_*. */
+	get s3() {
+		return {
+			bucket: read('S3_BUCKET', ''),
+			region: read('S3_REGION', read('AWS_REGION', '')),
+			endpoint: read('S3_ENDPOINT', ''),
+			accessKeyId: read('S3_ACCESS_KEY_ID', ''),
+			secretAccessKey: read('S3_SECRET_ACCESS_KEY', ''),
+			forcePathStyle: read('S3_FORCE_PATH_STYLE', '')
+		};
 	},
 	get smtpUrl() {
 		return read('SMTP_URL', 'smtp://127.0.0.1:2525');

@@ -1,4 +1,6 @@
 import { SequelizeStorage, Umzug } from 'umzug';
+import { checkDatabase } from './connect';
+import { afterMigrations, beforeMigrations, withMigrationLock } from './dialect';
 import { migrations } from './migrations';
 import { sequelize } from './sequelize';
 
@@ -13,16 +15,17 @@ function umzug() {
 
 let done: Promise<string[]> | undefined;
 
-/** Brings the schema up to date once per process; safe to call from every entry point. */
+/**
+ * Brings the schema up to date once per process; safe to call from every entry point, and from
+ * several processes at once on PostgreSQL. A database that cannot be reached or a bad
+ * DATABASE_URL rejects with a DatabaseConfigError (one sentence).
+ */
 export function migrate(): Promise<string[]> {
 	done ??= (async () => {
-		// WAL persists in the file; setting it once per process is enough.
-		await sequelize.query('PRAGMA journal_mode=WAL');
-		const applied = await umzug().up();
-		// SQLite's advice for a long-lived connection: refresh the planner's statistics where they
-		// are missing or stale, with a bounded sample so a large file still starts quickly.
-		await sequelize.query('PRAGMA analysis_limit=1000');
-		await sequelize.query('PRAGMA optimize=0x10002');
+		await checkDatabase();
+		await beforeMigrations(sequelize);
+		const applied = await withMigrationLock(sequelize, () => umzug().up());
+		await afterMigrations(sequelize);
 		return applied.map((m) => m.name);
 	})();
 	return done;

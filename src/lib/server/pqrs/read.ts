@@ -5,7 +5,8 @@ import { pqrValuesSchema, testsSchema, type PqrValues, type TestResult } from '$
 import { qualifiedRanges, type PqrQualified } from '$lib/procedures/pqr-values';
 import { audit } from '../audit';
 import type { SessionUser } from '../auth/session-user';
-import { write } from '../db';
+import { sequelize, write } from '../db';
+import { likeOp } from '../db/dialect';
 import {
 	Pqr,
 	PqrAddendum,
@@ -198,7 +199,9 @@ export async function listPqrs(
 	if (f.state) and.push({ state: f.state });
 	if (f.q) {
 		const q = `%${f.q.replace(/%/g, '')}%`;
-		and.push({ [Op.or]: [{ number: { [Op.like]: q } }, { title: { [Op.like]: q } }] });
+		and.push({
+			[Op.or]: [{ number: { [likeOp(sequelize)]: q } }, { title: { [likeOp(sequelize)]: q } }]
+		});
 	}
 	const rows = await Pqr.findAll({
 		where: { [Op.and]: and },

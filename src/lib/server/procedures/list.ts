@@ -1,5 +1,7 @@
 // The procedure list (filters on the indexed mirror columns) and the inspector's review queue.
 import { Op, type WhereOptions } from 'sequelize';
+import { likeOp } from '../db/dialect';
+import { sequelize } from '../db/sequelize';
 import type { ProcedureFilters } from '$lib/schemas/procedure';
 import type { RevisionStateId } from '$lib/procedures/options';
 import { countOf } from '$lib/procedures/findings';
@@ -35,7 +37,7 @@ export async function listProcedures(
 	if (f.family) and.push({ baseMetalFamily: f.family });
 	if (f.q)
 		for (const w of f.q.toLowerCase().replace(/%/g, '').split(/\s+/).filter(Boolean).slice(0, 5))
-			and.push({ searchText: { [Op.like]: `%${w}%` } });
+			and.push({ searchText: { [likeOp(sequelize)]: `%${w}%` } });
 	const { rows, count } = await Procedure.findAndCountAll({
 		where: { [Op.and]: and },
 		order: [

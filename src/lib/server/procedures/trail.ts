@@ -1,6 +1,8 @@
 // The audit trail of procedures and PQRs: per object, and shop-wide for admins with filters and a
 // CSV export. Events are append-only; before and after are shown as the paths that changed.
 import { Op, type WhereOptions } from 'sequelize';
+import { likeOp } from '../db/dialect';
+import { sequelize } from '../db/sequelize';
 import type { SessionUser } from '../auth/session-user';
 import { AuditEvent, ProcedureRevision, RevisionRecord } from '../models';
 
@@ -120,8 +122,8 @@ export const TRAIL_PAGE = 100;
 function whereOf(actor: SessionUser, f: TrailFilters): WhereOptions<AuditEvent> {
 	const and: WhereOptions<AuditEvent>[] = [{ shopId: actor.shopId }];
 	if (f.type) and.push({ objectType: f.type });
-	if (f.action) and.push({ action: { [Op.like]: `%${f.action.replace(/%/g, '')}%` } });
-	if (f.actor) and.push({ actorName: { [Op.like]: `%${f.actor.replace(/%/g, '')}%` } });
+	if (f.action) and.push({ action: { [likeOp(sequelize)]: `%${f.action.replace(/%/g, '')}%` } });
+	if (f.actor) and.push({ actorName: { [likeOp(sequelize)]: `%${f.actor.replace(/%/g, '')}%` } });
 	if (f.object) and.push({ objectId: f.object });
 	if (f.from) and.push({ at: { [Op.gte]: new Date(`${f.from}T00:00:00Z`) } });
 	if (f.to)

@@ -1,9 +1,11 @@
 // The list's query: filters and sort from the URL, always inside the actor's shop. The indexes
 // of migrations 0003 and 0007 lead with shop_id and cover each filter and sort.
-import { Op, Sequelize, type Order, type WhereOptions } from 'sequelize';
+import { Op, type Order, type WhereOptions } from 'sequelize';
 import { parseLength, type UnitSystem } from '$lib/weld';
 import type { RecordFilterInput } from '$lib/schemas/settings-record';
 import type { SessionUser } from '../auth/session-user';
+import { sequelize } from '../db/sequelize';
+import { likeOp, unindexedTerm } from '../db/dialect';
 import { SettingsRecord, User } from '../models';
 
 export const PAGE_SIZE = 25;
@@ -19,13 +21,13 @@ export interface ResolvedFilters {
 type Attr = keyof SettingsRecord['_attributes'];
 
 /**
- * A filter term. `inOrder` writes it as `+column`, which SQLite will not look up in an index,
+ * A filter term. `inOrder` writes it as `+column` (dialect.ts), which SQLite will not look up in an index,
  * so the query walks the sort's index and stops at the page (see walkInOrder).
  */
 function term(attr: Attr, value: unknown, inOrder: boolean): WhereOptions<SettingsRecord> {
 	if (!inOrder) return { [attr]: value } as WhereOptions<SettingsRecord>;
 	const field = SettingsRecord.getAttributes()[attr]?.field ?? String(attr);
-	return Sequelize.where(Sequelize.literal(`+"${field}"`), value as never) as never;
+	return unindexedTerm<SettingsRecord>(sequelize, field, value);
 }
 
 export function resolveFilters(
@@ -61,7 +63,7 @@ export function resolveFilters(
 	if (f.q) {
 		// Every word must appear; '%' is dropped (SQLite's LIKE has no escape unless asked for one).
 		const words = f.q.toLowerCase().replace(/%/g, '').split(/\s+/).filter(Boolean).slice(0, 5);
-		for (const w of words) and.push({ searchText: { [Op.like]: `%${w}%` } });
+		for (const w of words) and.push({ searchText: { [likeOp(sequelize)]: `%${w}%` } });
 	}
 	return { where: { [Op.and]: and }, problems };
 }

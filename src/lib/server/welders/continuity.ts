@@ -1,11 +1,11 @@
 // The continuity log: dated uses of a process per welder, from a booth tap or entered by an
 // engineer or admin, and the ISO 9606-1 six-monthly confirmations.
 import type { RequestEvent } from '@sveltejs/kit';
-import { QueryTypes } from 'sequelize';
 import type { Process } from '$lib/weld';
 import { parseDate } from '$lib/weld/continuity';
 import { audit } from '../audit';
-import { sequelize, write } from '../db';
+import { write } from '../db';
+import { insertUnlessDuplicate } from '../db/dialect';
 import { ContinuityEntry, Qualification, QualificationConfirmation, User, Welder } from '../models';
 import type { ContinuitySource } from '../models/continuity-entry';
 import { ForbiddenError, NotFoundError, RefusedError } from '../people/errors';
@@ -83,33 +83,28 @@ export async function recordContinuity(input: RecordContinuityInput): Promise<Re
 		}
 
 		const now = new Date();
-		await ContinuityEntry.bulkCreate(
-			[
-				{
-					shopId: input.shopId,
-					welderId: welder.id,
-					process: input.process,
-					usedOn,
-					source: input.source,
-					note,
-					recordedById: recorder.id,
-					recordedByName: recorder.name,
-					createdAt: now,
-					updatedAt: now
-				}
-			],
-			{ ignoreDuplicates: true, transaction: t }
+		// Once per welder, process and day: the unique index decides, whichever process tapped first.
+		const created = await insertUnlessDuplicate(
+			ContinuityEntry,
+			{
+				shopId: input.shopId,
+				welderId: welder.id,
+				process: input.process,
+				usedOn,
+				source: input.source,
+				note,
+				recordedById: recorder.id,
+				recordedByName: recorder.name,
+				createdAt: now,
+				updatedAt: now
+			},
+			t
 		);
-		const [{ n }] = (await sequelize.query('SELECT changes() AS n', {
-			type: QueryTypes.SELECT,
-			transaction: t
-		})) as [{ n: number }];
 		const entry = await ContinuityEntry.findOne({
 			where: { welderId: welder.id, process: input.process, usedOn },
 			transaction: t,
 			rejectOnEmpty: true
 		});
-		const created = n > 0;
 		if (created)
 			await audit(
 				{

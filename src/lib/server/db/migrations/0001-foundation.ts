@@ -1,4 +1,5 @@
 import { DataTypes, type QueryInterface } from 'sequelize';
+import { appendOnly } from '../dialect';
 
 const timestamps = {
 	created_at: { type: DataTypes.DATE, allowNull: false },
@@ -110,10 +111,8 @@ export async function up({ context: q }: { context: QueryInterface }) {
 	await q.addIndex('audit_events', ['shop_id', 'at']);
 	await q.addIndex('audit_events', ['object_type', 'object_id']);
 	// The trail is append-only: the database itself refuses to rewrite or remove history.
-	await q.sequelize.query(`CREATE TRIGGER audit_events_no_update BEFORE UPDATE ON audit_events
-		BEGIN SELECT RAISE(ABORT, 'audit events are append-only'); END`);
-	await q.sequelize.query(`CREATE TRIGGER audit_events_no_delete BEFORE DELETE ON audit_events
-		BEGIN SELECT RAISE(ABORT, 'audit events are append-only'); END`);
+	// (SQLite: two RAISE(ABORT) triggers, as shipped; PostgreSQL: see dialect.ts.)
+	await appendOnly(q, 'audit_events', 'audit events are append-only', '\n\t\t');
 }
 
 export async function down({ context: q }: { context: QueryInterface }) {

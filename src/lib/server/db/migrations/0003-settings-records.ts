@@ -1,9 +1,10 @@
 import { DataTypes, type QueryInterface } from 'sequelize';
+import { realType } from '../dialect';
 
 // Settings records in SI (mm, A, V, mm/s, L/min, °C) and their photos. Every index leads with
 // shop_id: every query of the list is scoped to one shop, then filtered or sorted.
 export async function up({ context: q }: { context: QueryInterface }) {
-	const real = () => ({ type: DataTypes.REAL, allowNull: true });
+	const real = () => ({ type: realType(q), allowNull: true });
 	const str = (n: number) => ({ type: DataTypes.STRING(n), allowNull: true });
 	await q.createTable('settings_records', {
 		id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },

@@ -1,4 +1,5 @@
 import { DataTypes, type QueryInterface } from 'sequelize';
+import { appendOnly } from '../dialect';
 
 // Procedures (WPS) with revisions, PQRs with lab reports and addenda, and sign-offs. A revision's
 // variables are one JSON document; the columns beside it are what the lists filter on. Every
@@ -148,12 +149,8 @@ export async function up({ context: q }: { context: QueryInterface }) {
 	});
 	await q.addIndex('sign_offs', ['shop_id', 'revision_id']);
 
-	for (const table of ['sign_offs', 'pqr_addenda']) {
-		await q.sequelize.query(`CREATE TRIGGER ${table}_no_update BEFORE UPDATE ON ${table}
-			BEGIN SELECT RAISE(ABORT, '${table} are append-only'); END`);
-		await q.sequelize.query(`CREATE TRIGGER ${table}_no_delete BEFORE DELETE ON ${table}
-			BEGIN SELECT RAISE(ABORT, '${table} are append-only'); END`);
-	}
+	for (const table of ['sign_offs', 'pqr_addenda'])
+		await appendOnly(q, table, `${table} are append-only`, '\n\t\t\t');
 }
 
 export async function down({ context: q }: { context: QueryInterface }) {

@@ -1,4 +1,5 @@
 import { DataTypes, type QueryInterface } from 'sequelize';
+import { realType } from '../dialect';
 
 // Welders, their qualifications (WPQ), the continuity log, ISO 9606-1 confirmations, the lapse
 // notices already sent and the card verification links. Status is never stored: it is computed
@@ -50,9 +51,9 @@ export async function up({ context: q }: { context: QueryInterface }) {
 		wps_ref: str(60),
 		test_positions: str(40, false),
 		coupon_type: str(8, false),
-		coupon_diameter_mm: { type: DataTypes.REAL, allowNull: true },
-		coupon_thickness_mm: { type: DataTypes.REAL, allowNull: false },
-		deposit_thickness_mm: { type: DataTypes.REAL, allowNull: false },
+		coupon_diameter_mm: { type: realType(q), allowNull: true },
+		coupon_thickness_mm: { type: realType(q), allowNull: false },
+		deposit_thickness_mm: { type: realType(q), allowNull: false },
 		deposit_layers: { type: DataTypes.INTEGER, allowNull: true },
 		length_unit: str(4, false),
 		f_number: { type: DataTypes.INTEGER, allowNull: true },
