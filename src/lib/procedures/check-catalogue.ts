@@ -39,7 +39,15 @@ export const PRODUCT: Source = {
 };
 
 /** For the help page's list of sources. */
-export const PROCEDURE_SOURCES: readonly Source[] = [QW_424, QW_404_4, QW_401, QW_409_4, PRODUCT];
+export const PROCEDURE_SOURCES: readonly Source[] = [
+	QW_424,
+	QW_404_4,
+	QW_401,
+	QW_409_4,
+	S.ASME_IX_QW_255_256,
+	S.ISO_15614_1_RANGES,
+	PRODUCT
+];
 
 export const PROCEDURE_ONLY_CHECK_IDS = [
 	'pqr-support',
@@ -47,7 +55,8 @@ export const PROCEDURE_ONLY_CHECK_IDS = [
 	'pqr-current-type',
 	'pqr-p-number',
 	'pqr-f-number',
-	'pqr-positions'
+	'pqr-positions',
+	'pqr-code-rules'
 ] as const;
 
 export type ProcedureOnlyCheckId = (typeof PROCEDURE_ONLY_CHECK_IDS)[number];
@@ -109,5 +118,11 @@ export const PROCEDURE_CHECK_CATALOGUE: readonly ProcedureCatalogueEntry[] = [
 		'Positions the PQRs cover',
 		'Every production position against the test positions of the PQRs, by the position rules of QW-461.9 applied as the shop’s rule.',
 		[S.ASME_IX_QW_461_9]
+	),
+	e(
+		'pqr-code-rules',
+		'Changes from the PQR, by the procedure’s own code',
+		'ASME IX procedures: each change from the PQR classed by QW-255 (GMAW, FCAW) or QW-256 (GTAW) as essential, supplementary essential or nonessential. ISO 15614-1 procedures: transfer mode by 8.4.1, and a plain note where the standard has no range for the variable. D1.1 procedures keep the Table 4.5 triggers.',
+		[S.ASME_IX_QW_255_256, S.ISO_15614_1_RANGES, S.AWS_D1_1_TABLE_4_5]
 	)
 ];
