@@ -13,7 +13,7 @@ import {
 	THICKNESS_FILLET,
 	type FillerGroup
 } from '$reference/iso-9606-1';
-import { ISO_POSITIONS, type IsoPosition } from '$reference/iso-6947';
+import { ASME_TO_ISO, ISO_POSITIONS, type IsoPosition } from '$reference/iso-6947';
 import { ISO_9606_1_FILLET_SUPPLEMENT, ISO_9606_1_RANGES } from '$reference/sources';
 import { isNum, sourceOf, type FindingSource } from './findings';
 import type { MmRange } from './iso-15614-ranges';
@@ -206,4 +206,18 @@ export function isoWelderRanges(input: unknown): { items: IsoWelderItem[]; sourc
 		// Keep what was found.
 	}
 	return { items, source: SRC };
+}
+
+/** ASME / AWS test positions with their ISO 6947 equivalents, e.g. "3G (PF/PG)". Never throws. */
+export function withIso6947(positions: unknown): string {
+	if (!Array.isArray(positions)) return '';
+	return positions
+		.slice(0, 20)
+		.map((p) => {
+			if (typeof p !== 'string') return '?';
+			const k = p.trim().toUpperCase();
+			const iso = Object.hasOwn(ASME_TO_ISO, k) ? ASME_TO_ISO[k] : undefined;
+			return iso ? `${p.slice(0, 10)} (${iso.join('/')})` : p.slice(0, 10);
+		})
+		.join(', ');
 }
