@@ -9,6 +9,7 @@ import * as recordsFilterIndex from './0007-records-filter-index';
 import * as sharedState from './0008-shared-state';
 import * as recordsSearch from './0009-records-search';
 import * as continuityTaps from './0010-continuity-taps';
+import * as governingCode from './0011-governing-code';
 
 export interface Migration {
 	name: string;
@@ -28,5 +29,6 @@ export const migrations: Migration[] = [
 	{ name: '0007-records-filter-index', ...recordsFilterIndex },
 	{ name: '0008-shared-state', ...sharedState },
 	{ name: '0009-records-search', ...recordsSearch },
-	{ name: '0010-continuity-taps', ...continuityTaps }
+	{ name: '0010-continuity-taps', ...continuityTaps },
+	{ name: '0011-governing-code', ...governingCode }
 ];

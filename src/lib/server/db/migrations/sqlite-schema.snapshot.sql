@@ -128,7 +128,7 @@ CREATE TABLE `pqr_addenda` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` IN
 
 CREATE TABLE `pqr_reports` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `pqr_id` INTEGER NOT NULL REFERENCES `pqrs` (`id`), `storage_key` VARCHAR(80) NOT NULL UNIQUE, `original_name` VARCHAR(200) NOT NULL, `bytes` INTEGER NOT NULL, `sha256` VARCHAR(64) NOT NULL, `uploaded_by_id` UUID NOT NULL REFERENCES `users` (`id`), `removed_at` DATETIME, `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL);
 
-CREATE TABLE `pqrs` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `number` VARCHAR(40) NOT NULL, `title` VARCHAR(120) NOT NULL, `process` VARCHAR(8) NOT NULL, `state` VARCHAR(12) NOT NULL, `actual_values` TEXT NOT NULL, `tests` TEXT NOT NULL, `qualified` TEXT NOT NULL, `author_id` UUID NOT NULL REFERENCES `users` (`id`), `certified_by_id` UUID REFERENCES `users` (`id`), `certified_name` VARCHAR(120), `certified_at` DATETIME, `certified_digest` VARCHAR(64), `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL);
+CREATE TABLE `pqrs` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `number` VARCHAR(40) NOT NULL, `title` VARCHAR(120) NOT NULL, `process` VARCHAR(8) NOT NULL, `state` VARCHAR(12) NOT NULL, `actual_values` TEXT NOT NULL, `tests` TEXT NOT NULL, `qualified` TEXT NOT NULL, `author_id` UUID NOT NULL REFERENCES `users` (`id`), `certified_by_id` UUID REFERENCES `users` (`id`), `certified_name` VARCHAR(120), `certified_at` DATETIME, `certified_digest` VARCHAR(64), `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL, `code` VARCHAR(16) NOT NULL DEFAULT 'asme-ix');
 
 CREATE TABLE `procedure_numbering` (`shop_id` INTEGER PRIMARY KEY REFERENCES `shops` (`id`), `wps_pattern` VARCHAR(40) NOT NULL, `pqr_pattern` VARCHAR(40) NOT NULL, `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL);
 
@@ -166,7 +166,7 @@ CREATE TABLE 'settings_records_fts_docsize'(id INTEGER PRIMARY KEY, sz BLOB);
 
 CREATE TABLE 'settings_records_fts_idx'(segid, term, pgno, PRIMARY KEY(segid, term)) WITHOUT ROWID;
 
-CREATE TABLE `shops` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `name` VARCHAR(120) NOT NULL, `unit_system` VARCHAR(10) NOT NULL DEFAULT 'imperial', `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL);
+CREATE TABLE `shops` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `name` VARCHAR(120) NOT NULL, `unit_system` VARCHAR(10) NOT NULL DEFAULT 'imperial', `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL, `default_code` VARCHAR(16) NOT NULL DEFAULT 'asme-ix');
 
 CREATE TABLE `sign_offs` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `revision_id` INTEGER NOT NULL REFERENCES `procedure_revisions` (`id`), `user_id` UUID NOT NULL REFERENCES `users` (`id`), `printed_name` VARCHAR(120) NOT NULL, `role` VARCHAR(20) NOT NULL, `meaning` VARCHAR(12) NOT NULL, `comment` TEXT, `signed_at` DATETIME NOT NULL, `digest` VARCHAR(64) NOT NULL, `canonical` TEXT NOT NULL, `seal` VARCHAR(64) NOT NULL);
 
