@@ -63,7 +63,8 @@ test('a welder of the shop sees the values and cautions, and one tap logs GTAW o
 			if (!node) return [];
 			const text = node.textContent ?? '';
 			const out: string[] = [];
-			for (const m of text.matchAll(/\S+/g)) {
+			// A word: letters and digits up to a space, dash or slash (where a line may break).
+			for (const m of text.matchAll(/[^\s\-–/]+/g)) {
 				const r = document.createRange();
 				r.setStart(node, m.index);
 				r.setEnd(node, m.index + m[0].length);
