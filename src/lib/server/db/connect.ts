@@ -2,11 +2,12 @@
 // malformed DATABASE_URL, a server that does not answer, a refused password, a missing
 // database) becomes one sentence naming the variable, so the operator knows what to change.
 import { config } from '../config';
+import { ConfigError } from '../config-error';
 import { sqlState } from './dialect';
 import { sequelize } from './sequelize';
 
 /** A configuration problem: its message is the whole story and is shown without a stack. */
-export class DatabaseConfigError extends Error {
+export class DatabaseConfigError extends ConfigError {
 	override name = 'DatabaseConfigError';
 }
 
