@@ -53,6 +53,29 @@ test('a welder of the shop sees the values and cautions, and one tap logs GTAW o
 	const values = page.getByTestId('booth-values');
 	await expect(values).toContainText('Amperage');
 	await expect(values).toContainText(' A');
+	// No value tile breaks a word across lines on the phone ("suggeste / d"): every word of every
+	// value lies on one line box, at the 390 px of a small phone.
+	const phone = page.viewportSize();
+	await page.setViewportSize({ width: 390, height: 844 });
+	const brokenWords = await values.locator('dd').evaluateAll((dds) =>
+		dds.flatMap((dd) => {
+			const node = [...dd.childNodes].find((n) => n.nodeType === Node.TEXT_NODE);
+			if (!node) return [];
+			const text = node.textContent ?? '';
+			const out: string[] = [];
+			// A word: letters and digits up to a space, dash or slash (where a line may break).
+			for (const m of text.matchAll(/[^\s\-–/]+/g)) {
+				const r = document.createRange();
+				r.setStart(node, m.index);
+				r.setEnd(node, m.index + m[0].length);
+				const lines = new Set([...r.getClientRects()].map((b) => Math.round(b.top)));
+				if (lines.size > 1) out.push(m[0]);
+			}
+			return out;
+		})
+	);
+	expect(brokenWords).toEqual([]);
+	if (phone) await page.setViewportSize(phone);
 	await expect(page.getByTestId('safety-cautions')).toContainText('lens shade at least');
 	const tap = page.getByTestId('booth-tap');
 	if (before === 0) {

@@ -20,6 +20,8 @@ export interface SheetFigures {
 	pages: number;
 	bytes: number;
 	batch: { sheets: number; ms: number; sheetsPerSec: number };
+	/** The welder qualification card (same text path as the sheet): median of one, by size. */
+	card: { walletMs: number; sheetMs: number };
 	/** Font files parsed in the whole run: 3 means parsed once and reused. */
 	fontParses: number;
 	/** The download endpoint, when the bench gave a running server. */
@@ -85,6 +87,17 @@ export async function benchSheets(options: SheetBenchOptions = {}): Promise<Shee
 		await sheet.procedureSheetsPdf('Bench batch', inputs);
 		const batchMs = performance.now() - t;
 
+		const card = async (size: 'wallet' | 'a4') => {
+			const times: number[] = [];
+			for (let i = -5; i < runs; i++) {
+				const t0 = performance.now();
+				await sheet.qualificationCardPdf(sheet.fixtureCard(size));
+				if (i >= 0) times.push(performance.now() - t0);
+			}
+			return round(median(times));
+		};
+		const cardFigures = { walletMs: await card('wallet'), sheetMs: await card('a4') };
+
 		const figures: SheetFigures = {
 			medianMs: round(median(ms)),
 			p95Ms: round(p95(ms)),
@@ -98,6 +111,7 @@ export async function benchSheets(options: SheetBenchOptions = {}): Promise<Shee
 				ms: Math.round(batchMs),
 				sheetsPerSec: round((batchSize * 1000) / batchMs)
 			},
+			card: cardFigures,
 			fontParses: fontParses(),
 			targetMs: 20
 		};
@@ -120,6 +134,9 @@ export function printSheetFigures(f: SheetFigures): void {
 	);
 	console.log(
 		`  batch: ${f.batch.sheets} sheets in one PDF in ${f.batch.ms} ms = ${f.batch.sheetsPerSec} sheets/s`
+	);
+	console.log(
+		`  qualification card: median ${f.card.walletMs} ms wallet, ${f.card.sheetMs} ms A4 sheet`
 	);
 	console.log(`  font files parsed: ${f.fontParses} (3 = once each, reused)`);
 	if (f.http)

@@ -79,9 +79,9 @@ export async function ownServer(
 		HOST: '127.0.0.1',
 		BODY_SIZE_LIMIT: '80M',
 		BEADLINE_JOBS: 'off',
-		SIGNIN_LIMIT_IP_PER_MINUTE: '100000',
-		FORM_LIMIT_IP_PER_MINUTE: '100000',
-		BOOTH_LIMIT_IP_PER_MINUTE: '100000',
+		// Test-only: lifts the sign-in, form and booth caps where NODE_ENV is test (address-caps.ts).
+		NODE_ENV: 'test',
+		TEST_ONLY_LIFT_ADDRESS_CAPS: '1',
 		...opts.env
 	};
 	await prepareData(env, dataDir);

@@ -32,14 +32,28 @@ export function rangeValue(r: Range, kind: QuantityKind, system: UnitSystem): st
 const list = (xs: readonly (string | number)[], fmt: (x: string) => string = (x) => x) =>
 	xs.map((x) => fmt(String(x))).join(', ');
 
-export function groupsOf(v: RevisionVariables, system: UnitSystem): Group[] {
+/** Rows that belong to one process only: left out, when empty, for every other process. */
+const ONLY_FOR: Readonly<Record<string, RevisionVariables['process']>> = {
+	tungstenClass: 'GTAW',
+	tungstenDiameter: 'GTAW'
+};
+
+/**
+ * The variables in their groups. An empty row for another process (no tungsten on GMAW) is left
+ * out, unless `everyRow` asks for the full list (a diff pairs rows by position).
+ */
+export function groupsOf(v: RevisionVariables, system: UnitSystem, everyRow = false): Group[] {
 	const one = (x: number | null, kind: QuantityKind) =>
 		x === null ? '' : showQuantity(kind, x, system);
 	const e = v.electrical;
 	const g = (id: string, title: string, rows: [string, string, string][]): Group => ({
 		id,
 		title,
-		rows: rows.map(([key, label, value]) => ({ key, label, value }))
+		rows: rows
+			.filter(
+				([key, , value]) => everyRow || value !== '' || (ONLY_FOR[key] ?? v.process) === v.process
+			)
+			.map(([key, label, value]) => ({ key, label, value }))
 	});
 	return [
 		g('scope', 'Scope and code', [
@@ -118,8 +132,8 @@ export function diffRows(
 	b: RevisionVariables,
 	system: UnitSystem
 ): { group: string; key: string; label: string; a: string; b: string; changed: boolean }[] {
-	const ga = groupsOf(a, system);
-	const gb = groupsOf(b, system);
+	const ga = groupsOf(a, system, true);
+	const gb = groupsOf(b, system, true);
 	return ga.flatMap((group, i) =>
 		group.rows.map((row, j) => {
 			const other = gb[i]?.rows[j]?.value ?? '';

@@ -7,6 +7,7 @@
 import type { RequestEvent } from '@sveltejs/kit';
 import { col, fn, Op, type InferCreationAttributes } from 'sequelize';
 import { RateLimiter } from 'sveltekit-rate-limiter/server';
+import { perMinute } from '../address-caps';
 import { write } from '../db';
 import { BoothLookup } from '../models';
 import type { LookupOutcome } from '../models/booth-link';
@@ -14,14 +15,9 @@ import { LOOKUP_WINDOW_MS } from './lookup-window';
 
 export { LOOKUP_WINDOW_MS };
 
-function perMinute(name: string, fallback: number): number {
-	const n = Number(process.env[name]);
-	return Number.isFinite(n) && n > 0 ? n : fallback;
-}
-
 /** A shop behind one address may have a dozen phones scanning: generous, but finite. */
 export const boothLimiter = new RateLimiter({
-	IP: [perMinute('BOOTH_LIMIT_IP_PER_MINUTE', 120), 'm']
+	IP: [perMinute('BOOTH_LIMIT_IP_PER_MINUTE', 120, { liftableInTests: true }), 'm']
 });
 
 function addressOf(event: RequestEvent): string | null {

@@ -1,23 +1,25 @@
 // The welder's qualification card: wallet size (ISO/IEC 7810 ID-1, front and back) or a full
 // A4 / Letter sheet. Status is as at print time; the QR code (error correction Q, drawn as
 // vector squares so it stays sharp at any print size) opens the live check at /q/<token>.
-import { PDFDocument, rgb, type PDFFont, type PDFPage } from 'pdf-lib';
-import QRCode from 'qrcode';
+import { PDFDocument, type PDFFont } from 'pdf-lib';
 import { formatLength, type UnitSystem } from '$lib/weld/units';
 import type { QualificationView, WelderView } from '../welders/read';
-import { embedFonts, type PdfFonts } from './fonts';
+import { embedSharedFonts } from './font-cache';
+import type { PdfFonts } from './fonts';
+import { drawQr, fit, GREY, INK, MM, PAPER, STOP, wrap } from './layout';
+import { useNativeDeflate } from './native-deflate';
+import { drawTextLine } from './pdf-text';
 
 export type CardSize = 'wallet' | 'a4' | 'letter';
 
-const MM = 72 / 25.4;
+// The card draws through the same fast text path as the procedure sheet (pdf-text.ts, the
+// shared parsed fonts, native deflate): a card printed for a whole crew costs a sheet's time.
+useNativeDeflate();
+
 const SIZES: Record<CardSize, [number, number]> = {
 	wallet: [85.6 * MM, 53.98 * MM],
-	a4: [595.28, 841.89],
-	letter: [612, 792]
+	...PAPER
 };
-const INK = rgb(0.08, 0.09, 0.11);
-const GREY = rgb(0.3, 0.32, 0.37);
-const STOP = rgb(0.55, 0.11, 0.09);
 const SHORT_DEFER =
 	'Beadline advises and records; the code, the inspector and certified welders decide.';
 const DEFER =
@@ -30,47 +32,6 @@ export interface CardInput {
 	printedOn: string;
 	units: UnitSystem;
 	size: CardSize;
-}
-
-function drawQr(page: PDFPage, text: string, x: number, y: number, side: number): void {
-	const qr = QRCode.create(text, { errorCorrectionLevel: 'Q' });
-	const n = qr.modules.size;
-	const quiet = 4;
-	const cell = side / (n + 2 * quiet);
-	page.drawRectangle({ x, y, width: side, height: side, color: rgb(1, 1, 1) });
-	for (let r = 0; r < n; r++)
-		for (let c = 0; c < n; c++)
-			if (qr.modules.get(r, c))
-				page.drawRectangle({
-					x: x + (quiet + c) * cell,
-					y: y + side - (quiet + r + 1) * cell,
-					width: cell,
-					height: cell,
-					color: rgb(0, 0, 0)
-				});
-}
-
-/** Cuts text to a width with an ellipsis, so a long name never runs off the card. */
-function fit(text: string, font: PDFFont, size: number, width: number): string {
-	if (font.widthOfTextAtSize(text, size) <= width) return text;
-	let t = text;
-	while (t.length > 1 && font.widthOfTextAtSize(`${t}…`, size) > width) t = t.slice(0, -1);
-	return `${t}…`;
-}
-
-/** Splits text into lines no wider than `width`. */
-function wrap(text: string, font: PDFFont, size: number, width: number): string[] {
-	const lines: string[] = [];
-	let line = '';
-	for (const word of text.split(/\s+/)) {
-		const next = line ? `${line} ${word}` : word;
-		if (line && font.widthOfTextAtSize(next, size) > width) {
-			lines.push(line);
-			line = word;
-		} else line = next;
-	}
-	if (line) lines.push(line);
-	return lines;
 }
 
 const list = (p: readonly string[]) => (p.length ? p.join(', ') : 'none');
@@ -116,87 +77,38 @@ function walletCard(doc: PDFDocument, f: PdfFonts, c: CardInput): void {
 	drawQr(front, c.url, w - pad - qrSide, pad, qrSide);
 	const textW = w - 3 * pad - qrSide;
 	let y = h - pad - 7;
-	front.drawText(fit(c.shopName, f.bold, 7, w - 2 * pad), {
-		x: pad,
-		y,
-		size: 7,
-		font: f.bold,
-		color: GREY
-	});
+	drawTextLine(front, fit(c.shopName, f.bold, 7, w - 2 * pad), pad, y, 7, f.bold, GREY);
 	y -= 9;
-	front.drawText('Welder qualification card', {
-		x: pad,
-		y,
-		size: 6.5,
-		font: f.regular,
-		color: GREY
-	});
+	drawTextLine(front, 'Welder qualification card', pad, y, 6.5, f.regular, GREY);
 	y -= 14;
-	front.drawText(fit(c.welder.name, f.bold, 12, textW), {
-		x: pad,
-		y,
-		size: 12,
-		font: f.bold,
-		color: INK
-	});
+	drawTextLine(front, fit(c.welder.name, f.bold, 12, textW), pad, y, 12, f.bold, INK);
 	y -= 11;
-	front.drawText(`ID ${c.welder.stamp}`, { x: pad, y, size: 9, font: f.mono, color: INK });
+	drawTextLine(front, `ID ${c.welder.stamp}`, pad, y, 9, f.mono, INK);
 	y -= 12;
 	for (const q of c.welder.qualifications.slice(0, 5)) {
 		const color = q.status.state === 'current' ? INK : STOP;
-		front.drawText(
-			fit(`${q.process} ${q.testPositions.join('+')} — ${statusText(q)}`, f.regular, 6.5, textW),
-			{
-				x: pad,
-				y,
-				size: 6.5,
-				font: f.regular,
-				color
-			}
-		);
+		const line = `${q.process} ${q.testPositions.join('+')} — ${statusText(q)}`;
+		drawTextLine(front, fit(line, f.regular, 6.5, textW), pad, y, 6.5, f.regular, color);
 		y -= 8.5;
 	}
-	front.drawText(`Status as printed ${c.printedOn}. Scan for live status.`, {
-		x: pad,
-		y: pad,
-		size: 5,
-		font: f.regular,
-		color: GREY
-	});
+	const asPrinted = `Status as printed ${c.printedOn}. Scan for live status.`;
+	drawTextLine(front, asPrinted, pad, pad, 5, f.regular, GREY);
 
 	const back = doc.addPage([w, h]);
 	y = h - pad - 6;
-	back.drawText('Ranges qualified (ASME IX)', { x: pad, y, size: 6.5, font: f.bold, color: INK });
+	drawTextLine(back, 'Ranges qualified (ASME IX)', pad, y, 6.5, f.bold, INK);
 	y -= 8;
 	for (const q of c.welder.qualifications.slice(0, 4)) {
-		back.drawText(fit(qualLine(q), f.bold, 5.5, w - 2 * pad), {
-			x: pad,
-			y,
-			size: 5.5,
-			font: f.bold,
-			color: INK
-		});
+		drawTextLine(back, fit(qualLine(q), f.bold, 5.5, w - 2 * pad), pad, y, 5.5, f.bold, INK);
 		y -= 6.5;
 		for (const line of rangeLines(q, c.units).flatMap((l) => wrap(l, f.regular, 5, w - 2 * pad))) {
-			back.drawText(line, { x: pad, y, size: 5, font: f.regular, color: INK });
+			drawTextLine(back, line, pad, y, 5, f.regular, INK);
 			y -= 6;
 		}
 		y -= 1.5;
 	}
-	back.drawText(fit(SHORT_DEFER, f.regular, 4.5, w - 2 * pad), {
-		x: pad,
-		y: pad,
-		size: 4.5,
-		font: f.regular,
-		color: GREY
-	});
-	back.drawText(fit(c.url, f.mono, 4.5, w - 2 * pad), {
-		x: pad,
-		y: pad + 6,
-		size: 4.5,
-		font: f.mono,
-		color: GREY
-	});
+	drawTextLine(back, fit(SHORT_DEFER, f.regular, 4.5, w - 2 * pad), pad, pad, 4.5, f.regular, GREY);
+	drawTextLine(back, fit(c.url, f.mono, 4.5, w - 2 * pad), pad, pad + 6, 4.5, f.mono, GREY);
 }
 
 function sheet(doc: PDFDocument, f: PdfFonts, c: CardInput): void {
@@ -208,7 +120,7 @@ function sheet(doc: PDFDocument, f: PdfFonts, c: CardInput): void {
 	let y = h - m - 14;
 	const textW = w - 2 * m - qrSide - 16;
 	const text = (t: string, size: number, font: PDFFont, color = INK, x = m) =>
-		page.drawText(t, { x, y, size, font, color });
+		drawTextLine(page, t, x, y, size, font, color);
 	text(fit(c.shopName, f.bold, 12, textW), 12, f.bold, GREY);
 	y -= 18;
 	text('Welder qualification card', 11, f.regular, GREY);
@@ -260,7 +172,7 @@ export async function qualificationCardPdf(c: CardInput): Promise<Uint8Array> {
 	doc.setTitle(`Qualification card — ${c.welder.name} (${c.welder.stamp})`);
 	doc.setProducer('Beadline');
 	doc.setCreationDate(new Date());
-	const fonts = await embedFonts(doc);
+	const fonts = await embedSharedFonts(doc);
 	if (c.size === 'wallet') walletCard(doc, fonts, c);
 	else sheet(doc, fonts, c);
 	return doc.save();

@@ -43,10 +43,21 @@ export async function getPerson(actor: SessionUser, userId: string): Promise<Per
 	return person(u);
 }
 
-async function target(actor: SessionUser, userId: string, t: Transaction): Promise<User> {
-	const u = await User.findOne({ where: { id: userId, shopId: actor.shopId }, transaction: t });
-	if (!u) throw new NotFoundError('No such person in your shop.');
-	return u;
+/**
+ * The frame every admin action on a member shares: one transaction, the actor still an active
+ * admin, the member found in the actor's own shop (another shop's id is simply not found).
+ */
+function onMember<R>(
+	actor: SessionUser,
+	userId: string,
+	act: (u: User, me: User, t: Transaction) => Promise<R>
+): Promise<R> {
+	return write(async (t) => {
+		const me = await requireActiveAdmin(actor, t);
+		const u = await User.findOne({ where: { id: userId, shopId: actor.shopId }, transaction: t });
+		if (!u) throw new NotFoundError('No such person in your shop.');
+		return act(u, me, t);
+	});
 }
 
 type MemberChange = Partial<Pick<User, 'role' | 'active' | 'sessionVersion'>>;
@@ -69,6 +80,10 @@ async function changeMember(
 	);
 }
 
+/** The member as stored after a change. */
+const reloaded = async (u: User, t: Transaction): Promise<Person> =>
+	person(await u.reload({ transaction: t }));
+
 /** A shop always keeps one active admin, or nobody could invite, assign roles or recover. */
 async function refuseIfLastAdmin(u: User, t: Transaction): Promise<void> {
 	if (u.role !== 'admin' || !u.active) return;
@@ -82,82 +97,59 @@ async function refuseIfLastAdmin(u: User, t: Transaction): Promise<void> {
 		);
 }
 
-export async function changeRole(
+export function changeRole(
 	actor: SessionUser,
 	userId: string,
 	role: Role,
 	event: RequestEvent | null = null
 ): Promise<Person> {
-	return write(async (t) => {
-		const me = await requireActiveAdmin(actor, t);
-		const u = await target(actor, userId, t);
+	return onMember(actor, userId, async (u, me, t) => {
 		if (u.role === role) return person(u);
 		if (u.role === 'admin') await refuseIfLastAdmin(u, t);
 		if (u.id === me.id)
 			throw new RefusedError('You cannot change your own role. Ask another admin.', 'role');
 		await changeMember(u, actorRef(me), 'user.role_changed', { role: u.role }, { role }, event, t);
-		return person(await u.reload({ transaction: t }));
+		return reloaded(u, t);
 	});
 }
 
 /** Disabling also bumps the session version, so every session of that person ends now. */
-export async function disableMember(
+export function disableMember(
 	actor: SessionUser,
 	userId: string,
 	event: RequestEvent | null = null
 ): Promise<Person> {
-	return write(async (t) => {
-		const me = await requireActiveAdmin(actor, t);
-		const u = await target(actor, userId, t);
+	return onMember(actor, userId, async (u, me, t) => {
 		if (!u.active) return person(u);
 		await refuseIfLastAdmin(u, t);
 		if (u.id === me.id) throw new RefusedError('You cannot disable yourself. Ask another admin.');
-		await changeMember(
-			u,
-			actorRef(me),
-			'user.disabled',
-			{ active: true, sessionVersion: u.sessionVersion },
-			{ active: false, sessionVersion: u.sessionVersion + 1 },
-			event,
-			t
-		);
-		return person(await u.reload({ transaction: t }));
+		const before = { active: true, sessionVersion: u.sessionVersion };
+		const after = { active: false, sessionVersion: u.sessionVersion + 1 };
+		await changeMember(u, actorRef(me), 'user.disabled', before, after, event, t);
+		return reloaded(u, t);
 	});
 }
 
-export async function enableMember(
+export function enableMember(
 	actor: SessionUser,
 	userId: string,
 	event: RequestEvent | null = null
 ): Promise<Person> {
-	return write(async (t) => {
-		const me = await requireActiveAdmin(actor, t);
-		const u = await target(actor, userId, t);
+	return onMember(actor, userId, async (u, me, t) => {
 		if (u.active) return person(u);
-		await changeMember(
-			u,
-			actorRef(me),
-			'user.enabled',
-			{ active: false },
-			{ active: true },
-			event,
-			t
-		);
-		return person(await u.reload({ transaction: t }));
+		const [before, after] = [{ active: false }, { active: true }];
+		await changeMember(u, actorRef(me), 'user.enabled', before, after, event, t);
+		return reloaded(u, t);
 	});
 }
 
 /** Ends every session of a member of the shop (their next request finds a newer version). */
-export async function signOutEverywhere(
+export function signOutEverywhere(
 	actor: SessionUser,
 	userId: string,
 	event: RequestEvent | null = null
 ): Promise<void> {
-	await write(async (t) => {
-		const me = await requireActiveAdmin(actor, t);
-		const u = await target(actor, userId, t);
-		await bumpSessionVersion(u, actorRef(me), event, t);
-	});
+	return onMember(actor, userId, (u, me, t) => bumpSessionVersion(u, actorRef(me), event, t));
 }
 
 /** Shared with the profile page's own "sign out everywhere". */
@@ -167,15 +159,11 @@ export async function bumpSessionVersion(
 	event: RequestEvent | null,
 	t: Transaction
 ): Promise<void> {
-	await changeMember(
-		u,
-		actor,
-		'user.signed_out_everywhere',
+	const [before, after] = [
 		{ sessionVersion: u.sessionVersion },
-		{ sessionVersion: u.sessionVersion + 1 },
-		event,
-		t
-	);
+		{ sessionVersion: u.sessionVersion + 1 }
+	];
+	await changeMember(u, actor, 'user.signed_out_everywhere', before, after, event, t);
 }
 
 export interface PeopleCounts {

@@ -98,6 +98,14 @@ describe('sheet downloads', () => {
 		expect(after.revisions).toContain('WPS-SA-BATCH rev 1');
 		// The tampered one from the test before is in force still and printed as such.
 		expect(after.notIntact).toHaveLength(1);
+		// Every printed revision is named in full, in print order.
+		expect(after.printed).toHaveLength(sheets.length);
+		expect(
+			after.printed.map((p: { number: string; rev: number }) => `${p.number} rev ${p.rev}`)
+		).toEqual(sheets.map((s) => `${s.number} rev ${s.rev}`));
+		expect(after.printed).toContainEqual(
+			expect.objectContaining({ number: 'WPS-SA-BATCH', rev: 1, revisionId, intact: true })
+		);
 	});
 
 	it('answers 403 for a member no longer allowed and 503 when the trail cannot be written', async () => {

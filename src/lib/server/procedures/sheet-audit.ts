@@ -121,7 +121,16 @@ export async function recordSheetBatchDownload(
 					paper: sheets[0]?.paper ?? null,
 					revisionIds: ids(found),
 					revisions: found.map((s) => `${s.number} rev ${s.rev}`),
-					notIntact: ids(found.filter((s) => !s.intact))
+					notIntact: ids(found.filter((s) => !s.intact)),
+					// Every sheet in the PDF, in print order, as fully as the one-sheet event names it
+					// (a revision not found again still shows by number and rev).
+					printed: found.map((s) => ({
+						procedureId: s.procedureId,
+						number: s.number,
+						rev: s.rev,
+						revisionId: s.revisionId,
+						intact: s.intact
+					}))
 				}
 			},
 			event,

@@ -193,6 +193,7 @@ export interface PlotPoint {
 	thicknessMm: number;
 	amps: number;
 	outcomeKind: string | null;
+	process: string;
 	label: string;
 }
 
@@ -225,6 +226,7 @@ export async function plotPoints(actor: SessionUser, f: RecordFilterInput) {
 		thicknessMm: r.thicknessMm as number,
 		amps: r.amps as number,
 		outcomeKind: r.outcomeKind,
+		process: r.process,
 		label: `#${r.id} ${r.process} ${r.fillerClass ?? ''} ${r.weldedOn}`.replace(/\s+/g, ' ')
 	}));
 	return { points, total, problems, capped: points.length >= PLOT_LIMIT };

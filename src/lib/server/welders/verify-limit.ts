@@ -1,9 +1,5 @@
 import { RateLimiter } from 'sveltekit-rate-limiter/server';
-
-function perMinute(name: string, fallback: number): number {
-	const n = Number(process.env[name]);
-	return Number.isFinite(n) && n > 0 ? n : fallback;
-}
+import { perMinute } from '../address-caps';
 
 /** The public card check: anyone may scan, nobody may walk the token space from one address. */
 export const verifyLimiter = new RateLimiter({

@@ -20,6 +20,13 @@ function bandSamples(process: string | undefined, family: MetalFamily, maxMm: nu
 	return { samples: out, source };
 }
 
+/** The process most of the plotted records use: its band is shown until a filter picks one. */
+function mostCommonProcess(points: { process: string }[]): string | undefined {
+	const counts = new Map<string, number>();
+	for (const p of points) counts.set(p.process, (counts.get(p.process) ?? 0) + 1);
+	return [...counts].sort((a, b) => b[1] - a[1] || a[0].localeCompare(b[0]))[0]?.[0];
+}
+
 export const load: PageServerLoad = async (event) => {
 	const user = requireRole(event, ...VIEW_ROLES);
 	const filters = readFilters(event.url.searchParams);
@@ -30,9 +37,11 @@ export const load: PageServerLoad = async (event) => {
 	]);
 	const maxMm = Math.max(6.35, ...plot.points.map((p) => p.thicknessMm)) * 1.1;
 	const family = (filters.family ?? 'carbon-steel') as MetalFamily;
+	const bandProcess = filters.process ?? mostCommonProcess(plot.points);
 	return {
 		...plot,
-		band: bandSamples(filters.process, family, maxMm),
+		band: bandSamples(bandProcess, family, maxMm),
+		bandProcess: bandProcess ?? null,
 		family,
 		maxMm,
 		filters,
