@@ -7,6 +7,8 @@ export default defineConfig({
 	test: {
 		include: ['src/**/*.test.ts', 'scripts/**/*.test.ts'],
 		environment: 'node',
+		// Property tests take one seed a file, printed on failure and replayed with FC_SEED.
+		setupFiles: ['src/lib/test-support/fast-check.ts'],
 		// SQLite files per test file; keep workers few so native builds stay light on 2 cores.
 		maxWorkers: 2,
 		testTimeout: 30_000,

@@ -5,12 +5,16 @@ import { currentMember } from '$lib/server/auth/current-member';
 import { exitOnConfigError, migrate } from '$lib/server/db';
 import { publicError } from '$lib/server/public-error';
 import { sweepUploads } from '$lib/server/maintenance/upload-sweep';
+import { orExit } from '$lib/server/config-error';
+import { checkStorage } from '$lib/server/storage/select';
 import { startJobTimers } from '$lib/server/jobs/timer';
 import { building } from '$app/environment';
 
 export const init: ServerInit = async () => {
 	// A bad DATABASE_URL or an unreachable database stops start-up with one sentence, no stack.
 	await migrate().catch(exitOnConfigError);
+	// A bucket that is missing or refuses the credentials stops start-up with one sentence.
+	if (!building) await orExit(checkStorage);
 	// After a crash: unfinished and unreferenced uploads move aside before any request is served.
 	if (!building) await sweepUploads(new Date(Date.now() - process.uptime() * 1000));
 	// The hourly lapse-notice run; never while building (BEADLINE_JOBS=off leaves it to cron).

@@ -42,8 +42,13 @@ async function healthy(origin: string, timeoutMs: number): Promise<void> {
 	throw new Error(`${origin} did not come up in ${timeoutMs} ms`);
 }
 
-/** Migrates and seeds a fresh data folder; `start()` then runs the built app on it. */
-export async function ownServer(opts: { dataDir?: string } = {}): Promise<OwnServer> {
+/**
+ * Migrates and seeds a fresh data folder; `start()` then runs the built app on it. `env` adds
+ * or overrides variables (e.g. a bucket's STORAGE=s3 and S3_* from scripts/lib/s3-fake.ts).
+ */
+export async function ownServer(
+	opts: { dataDir?: string; env?: Record<string, string> } = {}
+): Promise<OwnServer> {
 	const dataDir = opts.dataDir ?? mkdtempSync(join(tmpdir(), 'beadline-own-'));
 	const [port, smtpPort] = [await freePort(), await freePort()];
 	const origin = `http://localhost:${port}`;
@@ -61,7 +66,8 @@ export async function ownServer(opts: { dataDir?: string } = {}): Promise<OwnSer
 		BEADLINE_JOBS: 'off',
 		SIGNIN_LIMIT_IP_PER_MINUTE: '100000',
 		FORM_LIMIT_IP_PER_MINUTE: '100000',
-		BOOTH_LIMIT_IP_PER_MINUTE: '100000'
+		BOOTH_LIMIT_IP_PER_MINUTE: '100000',
+		...opts.env
 	};
 	const prep = spawnSync(process.execPath, ['--import', 'tsx', 'tests/support/prepare-data.ts'], {
 		env,

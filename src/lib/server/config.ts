@@ -26,6 +26,21 @@ export const config = {
 	get uploadsDir() {
 		return resolve(read('UPLOADS_DIR', './data/uploads'));
 	},
+	/** STORAGE: `local` (the default, UPLOADS_DIR) or `s3` (the S3_* variables). */
+	get storage() {
+		return read('STORAGE', 'local').toLowerCase();
+	},
+	/** Raw S3 settings; storage/s3-settings.ts checks them. Credentials may also be AWS_*. */
+	get s3() {
+		return {
+			bucket: read('S3_BUCKET', ''),
+			region: read('S3_REGION', read('AWS_REGION', '')),
+			endpoint: read('S3_ENDPOINT', ''),
+			accessKeyId: read('S3_ACCESS_KEY_ID', ''),
+			secretAccessKey: read('S3_SECRET_ACCESS_KEY', ''),
+			forcePathStyle: read('S3_FORCE_PATH_STYLE', '')
+		};
+	},
 	get smtpUrl() {
 		return read('SMTP_URL', 'smtp://127.0.0.1:2525');
 	},

@@ -25,6 +25,7 @@ import {
 	formatSpeed,
 	MM_PER_IN,
 	mmPerSToSpeed,
+	ownKey,
 	speedToMmPerS,
 	type UnitSystem
 } from './units';
@@ -58,7 +59,7 @@ export function thicknessAmpBand(
 	family: MetalFamily = 'carbon-steel',
 	system: UnitSystem = 'imperial'
 ): AmpBand | null {
-	if (!isNum(thicknessMm) || thicknessMm <= 0) return null;
+	if (!isNum(thicknessMm) || thicknessMm <= 0 || !ownKey(FAMILY_WORDS, family)) return null;
 	const inches = thicknessMm / MM_PER_IN;
 	const basis = `${formatLength(thicknessMm, system)} ${FAMILY_WORDS[family]}`;
 	if (process === 'GTAW') {

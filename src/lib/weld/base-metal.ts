@@ -3,18 +3,10 @@ import { BASE_METALS, type BaseMetalRow } from '$reference/base-metals';
 import { D1_1_CATEGORY_B_SPECS } from '$reference/aws-d1-1-preheat';
 import { ASME_IX_QW_422 } from '$reference/sources';
 import type { MetalFamily } from '$reference/types';
-import type { CheckContext } from './context';
-import { sourceOf, type Finding, guardCheck } from './findings';
+import { sourceOf, guardCheck } from './findings';
+import type { BaseMetal, CheckContext, Finding } from './types';
 
-export interface BaseMetal {
-	/** Null when only a family was given. */
-	row: BaseMetalRow | null;
-	family: MetalFamily;
-	pNumber: string | null;
-	group: number | null;
-	/** Listed under AWS D1.1:2015 Table 3.3 category B. */
-	d11CategoryB: boolean;
-}
+export type { BaseMetal } from './types';
 
 export type BaseMetalResult = { ok: true; metal: BaseMetal } | { ok: false; message: string };
 

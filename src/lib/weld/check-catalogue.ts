@@ -1,34 +1,10 @@
 // Every check Beadline runs, for the help page and for the finding's `check` field.
 import * as S from '$reference/sources';
 import type { Source } from '$reference/types';
-import { sourceOf, type FindingSource } from './findings';
+import { sourceOf } from './findings';
+import type { CheckId, FindingSource } from './types';
 
-export const CHECK_IDS = [
-	'amps-vs-thickness',
-	'amps-vs-filler',
-	'amps-vs-tungsten',
-	'tungsten-vs-current',
-	'wfs-vs-amps',
-	'current-type',
-	'heat-input',
-	'lens-shade',
-	'gas-vs-process',
-	'gas-flow',
-	'filler-classification',
-	'filler-vs-base-metal',
-	'base-metal',
-	'preheat',
-	'carbon-equivalent',
-	'within-procedure',
-	'requalification',
-	'pqr-ranges',
-	'welder-positions',
-	'welder-deposit-thickness',
-	'welder-diameter',
-	'continuity'
-] as const;
-
-export type CheckId = (typeof CHECK_IDS)[number];
+export { CHECK_IDS, type CheckId } from './types';
 
 export interface CatalogueEntry {
 	id: CheckId;

@@ -12,34 +12,11 @@ import {
 	ASME_IX_QW_442_MEMORY,
 	AWS_A5_CLASSIFICATION
 } from '$reference/sources';
-import type { CurrentType, MetalFamily, Source } from '$reference/types';
-import type { CheckContext } from './context';
-import { sourceOf, type Finding, guardCheck } from './findings';
+import type { CurrentType, MetalFamily } from '$reference/types';
+import { sourceOf, guardCheck } from './findings';
+import type { CheckContext, Filler, Finding } from './types';
 
-export type FillerForm = 'solid wire or rod' | 'flux-cored wire' | 'covered electrode';
-
-export interface Filler {
-	classification: string;
-	spec: string;
-	family: MetalFamily;
-	form: FillerForm;
-	minTensileKsi: number | null;
-	fNumber: number;
-	aNumber: number | null;
-	suits: readonly MetalFamily[];
-	meaning: string;
-	/** Shielding the classification calls for (FCAW C/M suffix, self-shielded types). */
-	gas?: 'CO2' | 'Ar/CO2 75-80 %' | 'none';
-	/** Currents the classification is made for, where the designation says. */
-	currents?: readonly CurrentType[];
-	/** The A5.18M twin when a metric designation was entered (ER48S-6 -> ER70S-6). */
-	enteredAs?: string;
-	/** False when the designation reads right but is not in Beadline's table. */
-	inTable: boolean;
-	source: Source;
-	fNumberSource: Source;
-	aNumberSource: Source;
-}
+export type { Filler, FillerForm } from './types';
 
 export type FillerResult = { ok: true; filler: Filler } | { ok: false; message: string };
 

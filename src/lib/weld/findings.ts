@@ -1,32 +1,8 @@
 // The shape every check answers with, and the small helpers the checks share.
 import type { Band, Source, SourceKind } from '$reference/types';
-import type { CheckId } from './check-catalogue';
-import type { CheckContext } from './context';
+import type { CheckContext, Expected, FindingSource, FindingStatus } from './types';
 
-export type FindingStatus = 'ok' | 'caution' | 'outside';
-
-export interface FindingSource {
-	label: string;
-	kind: SourceKind;
-}
-
-export interface Expected {
-	min?: number;
-	max?: number;
-	unit: string;
-}
-
-export interface Finding {
-	check: CheckId;
-	status: FindingStatus;
-	message: string;
-	/** The value checked, in `expected.unit` (a classification string for text checks). */
-	value: number | string | null;
-	expected: Expected;
-	source: FindingSource;
-	/** The input the finding concerns, as a path into the settings body: "amps", "filler.diameter". */
-	field?: string;
-}
+export type { Expected, Finding, FindingSource, FindingStatus } from './types';
 
 /** Shown once in the UI beside the findings, not repeated in each message. */
 export const ADVISORY_NOTE =
@@ -73,6 +49,7 @@ export function rangeText(min: string | null, max: string | null): string {
 }
 
 const round = (n: number, places: number): number => {
+	if (!isNum(n) || !isNum(places)) return NaN;
 	const f = 10 ** places;
 	return Math.round(n * f) / f;
 };

@@ -4,7 +4,7 @@ import { ASME_IX_QW_409_1, ISO_TR_17671_1 } from '$reference/sources';
 import type { Process, Source } from '$reference/types';
 import type { CheckContext } from './context';
 import { isNum, round, sourceOf, type Finding, guardCheck } from './findings';
-import { MM_PER_IN } from './units';
+import { MM_PER_IN, ownKey } from './units';
 
 const positive = (n: unknown): n is number => isNum(n) && n > 0;
 
@@ -28,7 +28,7 @@ export function arcEnergyKJPerMm(volts: number, amps: number, travelMmPerS: numb
 
 /** ISO/TR 17671-1 thermal efficiency factor for a process. */
 export function kFactor(process: Process): { k: number; iso4063: number; source: Source } {
-	const iso4063 = PROCESS_ISO4063[process] ?? 135;
+	const iso4063 = (ownKey(PROCESS_ISO4063, process) ? PROCESS_ISO4063[process] : undefined) ?? 135;
 	const row = K_FACTORS.find((r) => r.iso4063 === iso4063);
 	return { k: row?.k ?? 0.8, iso4063, source: ISO_TR_17671_1 };
 }

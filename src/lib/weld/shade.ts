@@ -4,6 +4,7 @@ import { OSHA_1910_133 } from '$reference/sources';
 import type { Process } from '$reference/types';
 import type { CheckContext } from './context';
 import { isNum, sourceOf, type Finding, guardCheck } from './findings';
+import { ownKey } from './units';
 
 export { SHADE_ADVICE };
 
@@ -28,7 +29,7 @@ const TABLE_PROCESS: Record<Process, ShadeProcess> = {
  * last band includes its upper edge (OSHA prints GTAW "150-500": 500 A is in the table).
  */
 export function lensShade(process: Process, amps: number): Shade | null {
-	const p = TABLE_PROCESS[process];
+	const p = ownKey(TABLE_PROCESS, process) ? TABLE_PROCESS[process] : undefined;
 	if (!p || !isNum(amps) || amps < 0) return null;
 	const rows = SHADE_TABLE.filter((r) => r.process === p);
 	const last = rows[rows.length - 1];

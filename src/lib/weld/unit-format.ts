@@ -54,6 +54,7 @@ export function formatInches(inches: number): string {
 
 /** mm the way codes print them: 0.1 mm under 10 mm (3/32 in -> 2.4 mm), whole mm above. */
 export function roundMm(mm: number): number {
+	if (!finite(mm)) return NaN;
 	if (mm < 0.1) return Math.round(mm * 100) / 100;
 	return mm < 10 ? Math.round(mm * 10) / 10 : Math.round(mm);
 }

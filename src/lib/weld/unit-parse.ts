@@ -153,6 +153,8 @@ export function parseLength(
 	defaultUnit: LengthUnit = 'in',
 	options: LengthOptions = {}
 ): Parsed<'mm'> {
+	// Defaults apply to undefined only; a null or non-object options reads as none given.
+	const opts: LengthOptions = options !== null && typeof options === 'object' ? options : {};
 	const s = clean(text);
 	if (s === null || s === '') return { ok: false, message: LENGTH_HINT };
 	let { num, unit } = splitUnit(s, LENGTH_ALIASES);
@@ -166,13 +168,13 @@ export function parseLength(
 	let mm: number;
 	if (unit === 'ga') {
 		if (n.fraction) return { ok: false, message: 'A gauge is a whole number, e.g. 16 ga.' };
-		const g = gaugeToMm(n.value, options.gauge ?? 'sheet-steel');
+		const g = gaugeToMm(n.value, opts.gauge ?? 'sheet-steel');
 		if (!g.ok) return g;
 		mm = g.mm;
 	} else {
 		mm = lengthToMm(n.value, unit ?? (n.fraction ? 'in' : defaultUnit));
 	}
-	const max = options.maxMm ?? 2540;
+	const max = finite(opts.maxMm) ? opts.maxMm : 2540;
 	if (!finite(mm) || mm > max)
 		return {
 			ok: false,

@@ -1,10 +1,12 @@
-// Where uploads live: a local folder outside static/ (config.uploadsDir), random names only.
-// Each file is written to a temporary name and renamed, so a half-written file is never visible.
+// Uploads: what is accepted (content sniffing, size limits), how images are re-encoded (sharp),
+// and the random names they are stored under. Where the bytes go is the back end's business
+// (select.ts: a local folder by default, an S3 bucket with STORAGE=s3); every object is stored
+// whole or not at all.
 import { randomBytes } from 'node:crypto';
-import { mkdir, readFile, rename, rm, stat, writeFile } from 'node:fs/promises';
-import { join } from 'node:path';
+import { Readable } from 'node:stream';
 import sharp, { type OutputInfo } from 'sharp';
-import { config } from '../config';
+import { KEY, objectName, readAll } from './backend';
+import { storage } from './select';
 import { EXTENSIONS, sniff, type UploadKind } from './sniff';
 
 export { sniff, type UploadKind };
@@ -21,20 +23,8 @@ export class UploadRefused extends Error {
 	}
 }
 
-const KEY = /^[0-9a-f]{32}(-t)?\.(jpg|png|pdf)$/;
-
-function pathOf(key: string): string {
-	// Keys are ours (random hex); anything else never reaches the file system.
-	if (!KEY.test(key)) throw new Error('Not a storage key');
-	return join(config.uploadsDir, key.slice(0, 2), key);
-}
-
 async function put(key: string, bytes: Uint8Array): Promise<void> {
-	const final = pathOf(key);
-	await mkdir(join(config.uploadsDir, key.slice(0, 2)), { recursive: true });
-	const temp = `${final}.${randomBytes(4).toString('hex')}.part`;
-	await writeFile(temp, bytes, { flag: 'wx' });
-	await rename(temp, final);
+	await (await storage()).put(objectName(key), bytes);
 }
 
 export interface StoredUpload {
@@ -110,26 +100,35 @@ export async function saveUpload(bytes: Uint8Array, options: SaveOptions): Promi
 	};
 }
 
+/** The stored object as a stream with its size, or null when the key is unknown. */
+export async function openUploadStream(
+	key: string
+): Promise<{ body: Readable; bytes: number } | null> {
+	// Keys are ours (random hex); anything else never reaches the store.
+	// A store that cannot be reached is an error (a 500 with its reference), not a missing file.
+	if (!KEY.test(key)) return null;
+	return (await storage()).get(objectName(key));
+}
+
 /** The stored bytes, or null when the key is unknown. */
 export async function openUpload(key: string): Promise<Buffer | null> {
-	try {
-		return await readFile(pathOf(key));
-	} catch {
-		return null;
-	}
+	const found = await openUploadStream(key);
+	return found && readAll(found.body);
 }
 
 export async function uploadExists(key: string): Promise<boolean> {
-	try {
-		return (await stat(pathOf(key))).isFile();
-	} catch {
-		return false;
-	}
+	return KEY.test(key) && (await (await storage()).exists(objectName(key)));
 }
 
 /** Removes stored files, e.g. after the transaction that would have referenced them failed. */
 export async function discardUploads(keys: readonly (string | undefined)[]): Promise<void> {
+	const store = await storage();
 	await Promise.all(
-		keys.filter((k): k is string => !!k && KEY.test(k)).map((k) => rm(pathOf(k), { force: true }))
+		keys.filter((k): k is string => !!k && KEY.test(k)).map((k) => store.delete(objectName(k)))
 	);
+}
+
+/** A stored object's stream as a Response body. */
+export function webStream(body: Readable): ReadableStream<Uint8Array> {
+	return Readable.toWeb(body) as ReadableStream<Uint8Array>;
 }

@@ -1,13 +1,15 @@
-import { mkdtempSync, readdirSync } from 'node:fs';
+import { mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import sharp from 'sharp';
-import { describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { startS3Fake, type S3Fake } from '../../../../scripts/lib/s3-fake';
 
 const dir = mkdtempSync(join(tmpdir(), 'beadline-uploads-'));
 process.env.UPLOADS_DIR = dir;
 
 const { discardUploads, openUpload, saveUpload, sniff, UploadRefused } = await import('./index');
+const { storage } = await import('./select');
 
 const IMAGES = { accept: ['image/jpeg', 'image/png'] as const, maxBytes: 10 * 1024 * 1024 };
 
@@ -19,13 +21,28 @@ async function rotatedJpeg(): Promise<Uint8Array> {
 		.toBuffer();
 }
 
-function allFiles(): string[] {
-	return readdirSync(dir, { recursive: true, withFileTypes: true })
-		.filter((d) => d.isFile())
-		.map((d) => d.name);
+/** The names of everything in the store, whichever back end it is. */
+async function allFiles(): Promise<string[]> {
+	const names: string[] = [];
+	for await (const o of (await storage()).list()) names.push(o.name.split('/').pop() ?? o.name);
+	return names;
 }
 
-describe('storage', () => {
+// The same checks on both back ends: the local folder and a bucket (s3rver on a free port).
+describe.each(['local', 's3'] as const)('storage on %s', (kind) => {
+	let fake: S3Fake | null = null;
+	beforeAll(async () => {
+		if (kind !== 's3') return;
+		fake = await startS3Fake();
+		Object.assign(process.env, fake.env);
+	});
+	afterAll(async () => {
+		if (!fake) return;
+		await (await storage()).close();
+		for (const k of Object.keys(fake.env)) delete process.env[k];
+		await fake.close();
+	});
+
 	it('sniffs JPEG, PNG and PDF by content only', () => {
 		expect(sniff(new Uint8Array([0xff, 0xd8, 0xff, 0xe0]))).toBe('image/jpeg');
 		expect(sniff(new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0]))).toBe(
@@ -48,7 +65,9 @@ describe('storage', () => {
 		expect((bytes as Buffer).includes('SecretCam')).toBe(false);
 		expect(await openUpload(stored.thumbKey as string)).not.toBeNull();
 		// No temporary files are left behind and nothing carries the uploaded name.
-		expect(allFiles().some((f) => f.endsWith('.part') || f.includes('IMG_0001'))).toBe(false);
+		expect((await allFiles()).some((f) => f.endsWith('.part') || f.includes('IMG_0001'))).toBe(
+			false
+		);
 	});
 
 	it('refuses a renamed executable, a broken JPEG, an empty and an oversized file', async () => {

@@ -1,7 +1,7 @@
 import { error } from '@sveltejs/kit';
 import { requireMember } from '$lib/server/auth/guards';
 import { SettingsPhoto } from '$lib/server/models';
-import { openUpload } from '$lib/server/storage';
+import { openUploadStream, webStream } from '$lib/server/storage';
 import type { RequestHandler } from './$types';
 
 // Any member of the owning shop may see a record's photos; nobody else learns they exist.
@@ -17,14 +17,15 @@ export const GET: RequestHandler = async (event) => {
 	});
 	if (!photo) error(404, { message: 'No such photo.' });
 	const thumb = event.url.searchParams.get('size') === 'thumb';
-	const bytes = await openUpload(thumb ? photo.thumbKey : photo.storageKey);
-	if (!bytes) error(404, { message: 'The photo file is missing from storage.' });
+	const found = await openUploadStream(thumb ? photo.thumbKey : photo.storageKey);
+	if (!found) error(404, { message: 'The photo file is missing from storage.' });
 	const type = thumb ? 'image/jpeg' : photo.mime;
 	const ext = type === 'image/png' ? 'png' : 'jpg';
-	return new Response(new Uint8Array(bytes), {
+	// Streamed from the store through this check: the bucket is never exposed to the browser.
+	return new Response(webStream(found.body), {
 		headers: {
 			'Content-Type': type,
-			'Content-Length': String(bytes.length),
+			'Content-Length': String(found.bytes),
 			// Inline so it shows in the page; the name is ours, never the uploaded one.
 			'Content-Disposition': `inline; filename="record-${photo.recordId}-photo-${photo.id}${thumb ? '-thumb' : ''}.${ext}"`,
 			'X-Content-Type-Options': 'nosniff',

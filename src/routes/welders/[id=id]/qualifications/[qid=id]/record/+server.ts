@@ -1,6 +1,6 @@
 import { error } from '@sveltejs/kit';
 import { requireRole } from '$lib/server/auth/guards';
-import { openUpload } from '$lib/server/storage';
+import { openUploadStream, webStream } from '$lib/server/storage';
 import { VIEW_ROLES } from '$lib/server/welders/access';
 import { qualificationRecord } from '$lib/server/welders/qualifications';
 import type { RequestHandler } from './$types';
@@ -13,12 +13,13 @@ export const GET: RequestHandler = async (event) => {
 		Number(event.params.id),
 		Number(event.params.qid)
 	);
-	const bytes = rec && (await openUpload(rec.key));
-	if (!rec || !bytes) error(404, { message: 'No test record here.' });
+	const found = rec && (await openUploadStream(rec.key));
+	if (!rec || !found) error(404, { message: 'No test record here.' });
 	const name = rec.name.replace(/[^A-Za-z0-9._-]+/g, '-').slice(0, 100) || 'test-record.pdf';
-	return new Response(new Uint8Array(bytes), {
+	return new Response(webStream(found.body), {
 		headers: {
 			'Content-Type': 'application/pdf',
+			'Content-Length': String(found.bytes),
 			'Content-Disposition': `attachment; filename="${name}"`,
 			'X-Content-Type-Options': 'nosniff',
 			'Cache-Control': 'private, no-store'
