@@ -30,8 +30,9 @@ describe.skipIf(!onPostgres)('db:copy (needs PostgreSQL: runs in the PostgreSQL 
 	it('copies the SQLite demo to an empty PostgreSQL database and verifies every signature', async () => {
 		const { copyDatabase } = await import('./lib/db-copy');
 		const uploadsFrom = join(dir, 'up-from');
+		const key = `ab${'0'.repeat(30)}.jpg`;
 		mkdirSync(join(uploadsFrom, 'ab'), { recursive: true });
-		writeFileSync(join(uploadsFrom, 'ab', 'ab12.jpg'), 'photo bytes');
+		writeFileSync(join(uploadsFrom, 'ab', key), 'photo bytes');
 		const report = await copyDatabase({
 			from: `sqlite:${demo}`,
 			to: process.env.DATABASE_URL!,
@@ -44,7 +45,7 @@ describe.skipIf(!onPostgres)('db:copy (needs PostgreSQL: runs in the PostgreSQL 
 		expect(report.signaturesChecked).toBeGreaterThan(0);
 		expect(report.pqrsChecked).toBeGreaterThan(0);
 		expect(report.uploads.files).toBe(1);
-		expect(readFileSync(join(dir, 'up-to', 'ab', 'ab12.jpg'), 'utf8')).toBe('photo bytes');
+		expect(readFileSync(join(dir, 'up-to', 'ab', key), 'utf8')).toBe('photo bytes');
 		// The id sequences moved past the copied ids: a new row does not collide.
 		const { Shop } = await import('../src/lib/server/models');
 		const shop = await Shop.create({ name: 'After the copy' });

@@ -1,5 +1,5 @@
 // npm run db:copy -- --from sqlite:./data/beadline.sqlite --to postgres://user:pw@host/beadline
-//   [--uploads-from DIR --uploads-to DIR]
+//   [--uploads-from DIR|s3 --uploads-to DIR|s3]
 // Copies everything from one database to another, empty one (either direction), then verifies
 // row counts and every signature. Stop the app first: writes made during the copy are not copied.
 import { parseArgs } from 'node:util';

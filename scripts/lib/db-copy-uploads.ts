@@ -1,45 +1,34 @@
-// The uploads half of db:copy: photos and lab reports move with the database when the two
-// installations keep them in different places.
-//
-// TODO(issue 12, item 4): when the storage back ends (local folder, S3) are on main, copy through
-// their exported "copy every upload between back ends" function here, so --uploads-from and
-// --uploads-to can name a bucket too. Until then both are local folders.
-import { cp, readdir, stat } from 'node:fs/promises';
-import { join, resolve } from 'node:path';
+// The uploads half of db:copy: photos and lab reports move with the database, between any two
+// storage back ends (src/lib/server/storage/copy.ts: each object verified by size and SHA-256 in
+// the target). A back end is named by a folder path or by `s3` (the bucket of STORAGE_S3_* / the
+// S3 variables in the environment, as the app itself reads them).
+import { resolve } from 'node:path';
+import type { StorageBackend } from '../../src/lib/server/storage/backend';
+import { copyUploads as copyObjects } from '../../src/lib/server/storage/copy';
+import { LocalStorage } from '../../src/lib/server/storage/local';
 
 export interface UploadsCopy {
 	files: number;
 	bytes: number;
 	/** Why nothing was copied, when nothing was. */
 	skipped?: string;
+	/** Objects that did not arrive intact (a failed verification). */
+	problems: string[];
 }
 
-async function tally(dir: string): Promise<{ files: number; bytes: number }> {
-	let files = 0;
-	let bytes = 0;
-	for (const e of await readdir(dir, { withFileTypes: true, recursive: true })) {
-		if (!e.isFile()) continue;
-		files++;
-		bytes += (await stat(join(e.parentPath, e.name))).size;
+async function backendOf(spec: string): Promise<StorageBackend> {
+	if (spec === 's3') {
+		const { s3FromEnv } = await import('../../src/lib/server/storage/s3');
+		return s3FromEnv();
 	}
-	return { files, bytes };
+	return new LocalStorage(resolve(spec));
 }
 
-/** Copies every upload under `from` into `to`, never overwriting a file already there. */
+/** Copies every upload of `from` into `to` (a folder or `s3`); one already there intact is kept. */
 export async function copyUploads(from?: string, to?: string): Promise<UploadsCopy> {
-	if (!from || !to)
-		return { files: 0, bytes: 0, skipped: 'no --uploads-from and --uploads-to given' };
-	if (resolve(from) === resolve(to)) return { files: 0, bytes: 0, skipped: 'same folder' };
-	try {
-		await stat(from);
-	} catch {
-		return { files: 0, bytes: 0, skipped: `${from} does not exist (no uploads yet)` };
-	}
-	await cp(from, to, {
-		recursive: true,
-		force: false,
-		errorOnExist: false,
-		preserveTimestamps: true
-	});
-	return tally(from);
+	const none = (skipped: string): UploadsCopy => ({ files: 0, bytes: 0, skipped, problems: [] });
+	if (!from || !to) return none('no --uploads-from and --uploads-to given');
+	if (from !== 's3' && to !== 's3' && resolve(from) === resolve(to)) return none('same folder');
+	const r = await copyObjects(await backendOf(from), await backendOf(to));
+	return { files: r.copied + r.skipped, bytes: r.bytes, problems: r.problems };
 }

@@ -153,7 +153,7 @@ async function verifySignatures(): Promise<{
 export interface CopyOptions {
 	from: string;
 	to: string;
-	/** Upload folders (local storage); left out, the uploads are not copied. */
+	/** Upload back ends: a folder path or `s3`; left out, the uploads are not copied. */
 	uploadsFrom?: string;
 	uploadsTo?: string;
 	log?: (line: string) => void;
@@ -206,7 +206,7 @@ export async function copyDatabase(opts: CopyOptions): Promise<CopyReport> {
 
 		const report: CopyReport = {
 			tables: [],
-			uploads: { files: 0, bytes: 0, skipped: 'not asked' },
+			uploads: { files: 0, bytes: 0, skipped: 'not asked', problems: [] },
 			signaturesChecked: 0,
 			pqrsChecked: 0
 		};
@@ -221,6 +221,10 @@ export async function copyDatabase(opts: CopyOptions): Promise<CopyReport> {
 			await resetSequences(target, tables, t);
 		});
 		report.uploads = await copyUploads(opts.uploadsFrom, opts.uploadsTo);
+		if (report.uploads.problems.length)
+			throw new CopyRefused(
+				`Verification failed, uploads did not arrive intact: ${report.uploads.problems.slice(0, 5).join('; ')}.`
+			);
 
 		const mismatched: string[] = [];
 		for (const t of tables) {

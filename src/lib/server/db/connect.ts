@@ -3,12 +3,13 @@
 // database) becomes one sentence naming the variable, so the operator knows what to change.
 import type { Sequelize } from 'sequelize';
 import { config } from '../config';
+import { ConfigError } from '../config-error';
 import type { DatabaseTarget } from './database-url';
 import { sqlState } from './dialect';
 import { sequelize } from './sequelize';
 
-/** A configuration problem: its message is the whole story and is shown without a stack. */
-export class DatabaseConfigError extends Error {
+/** A database configuration problem: its message is the whole story and is shown without a stack. */
+export class DatabaseConfigError extends ConfigError {
 	override name = 'DatabaseConfigError';
 }
 
@@ -63,11 +64,11 @@ export async function checkDatabase(
 
 /**
  * For entry points (server start, scripts): `await migrate().catch(exitOnConfigError)`. A
- * DatabaseConfigError is printed as its one sentence and the process stops with status 1;
+ * ConfigError (DatabaseConfigError, or storage's) is printed as its one sentence and the process stops with status 1;
  * anything else is thrown on to the usual handling.
  */
 export function exitOnConfigError(e: unknown): never {
-	if (e instanceof DatabaseConfigError) {
+	if (e instanceof ConfigError) {
 		console.error(e.message);
 		process.exit(1);
 	}
