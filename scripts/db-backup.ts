@@ -4,6 +4,13 @@ import { join, resolve } from 'node:path';
 import { config } from '../src/lib/server/config';
 import { createBackup } from './lib/backup';
 
+if (config.database.kind !== 'sqlite') {
+	console.error(
+		"DATABASE_URL names a PostgreSQL database: npm run db:backup backs up the SQLite file only; use pg_dump / pg_restore (and the bucket's own versioning) there."
+	);
+	process.exit(1);
+}
+
 function argValue(name: string): string | undefined {
 	const i = process.argv.indexOf(name);
 	return i >= 0 ? process.argv[i + 1] : undefined;

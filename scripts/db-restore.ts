@@ -5,6 +5,13 @@ import { resolve } from 'node:path';
 import { config } from '../src/lib/server/config';
 import { restoreBackup } from './lib/backup';
 
+if (config.database.kind !== 'sqlite') {
+	console.error(
+		"DATABASE_URL names a PostgreSQL database: npm run db:restore restores the SQLite file only; use pg_dump / pg_restore (and the bucket's own versioning) there."
+	);
+	process.exit(1);
+}
+
 const dir = process.argv.slice(2).find((a) => !a.startsWith('--'));
 if (!dir) {
 	console.error('Usage: npm run db:restore -- <backup folder> [--force]');
