@@ -24,6 +24,11 @@ const { seedDemo } = await import('../src/lib/server/seed/seed-demo');
 const { createRecord } = await import('../src/lib/server/records');
 const { settingsRecordSchema } = await import('../src/lib/schemas/settings-record');
 const { addMember } = await import('../src/lib/server/people/test-support');
+const { startS3Fake } = await import('./lib/s3-fake');
+const { S3Storage } = await import('../src/lib/server/storage/s3');
+const { s3Settings } = await import('../src/lib/server/storage/s3-settings');
+const { LocalStorage } = await import('../src/lib/server/storage/local');
+const { copyUploads, digest } = await import('../src/lib/server/storage/copy');
 
 type Actor = Awaited<ReturnType<typeof addMember>>;
 let engineer: Actor;
@@ -158,4 +163,46 @@ describe('db:backup and db:restore', () => {
 		expect(second.status, second.stderr).toBe(0);
 		expect(second.stdout).toMatch(/kept the previous .*before-restore/);
 	}, 60_000);
+
+	it('with STORAGE=s3 copies every object of the bucket into the folder and restores them into one', async () => {
+		const fake = await startS3Fake({ buckets: ['beadline-restored'] });
+		const bucket = (name: string) =>
+			new S3Storage(
+				s3Settings({
+					bucket: name,
+					region: '',
+					endpoint: fake.endpoint,
+					accessKeyId: 'S3RVER',
+					secretAccessKey: 'S3RVER',
+					forcePathStyle: ''
+				})
+			);
+		const [live3, restored3] = [bucket(fake.bucket), bucket('beadline-restored')];
+		try {
+			expect((await copyUploads(new LocalStorage(live.uploadsDir), live3)).problems).toEqual([]);
+			const out = join(dir, 'backup-s3');
+			const m = await createBackup({ ...live, uploads: live3, outDir: out });
+			expect(await verifyBackup(out)).toEqual([]);
+			expect(m.uploads.missing).toEqual([]);
+			const inBucket: string[] = [];
+			for await (const o of live3.list()) inBucket.push(o.name);
+			expect(m.uploads.files.map((f) => f.path)).toEqual(inBucket.sort());
+
+			const target = {
+				databaseFile: join(dir, 'r-s3', 'b.sqlite'),
+				uploadsDir: join(dir, 'r-s3', 'up')
+			};
+			await restoreBackup({ dir: out, ...target, bucket: restored3 });
+			for (const f of m.uploads.files) {
+				const got = await restored3.get(f.path);
+				expect(got && (await digest(got.body)).sha256, f.path).toBe(f.sha256);
+			}
+			// The bucket took the uploads; no local folder was made for them.
+			expect(existsSync(target.uploadsDir)).toBe(false);
+		} finally {
+			await live3.close();
+			await restored3.close();
+			await fake.close();
+		}
+	});
 });

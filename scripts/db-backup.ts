@@ -1,7 +1,10 @@
-// npm run db:backup [-- --out DIR] — an online backup of DATABASE_FILE and UPLOADS_DIR while the
-// server keeps running: the SQLite backup API, then a copy of the uploads, then a manifest.
+// npm run db:backup [-- --out DIR] — an online backup of DATABASE_FILE and the uploads while the
+// server keeps running: the SQLite backup API, then a copy of every stored upload (UPLOADS_DIR,
+// or with STORAGE=s3 every object of the bucket, downloaded into the folder), then a manifest.
 import { join, resolve } from 'node:path';
 import { config } from '../src/lib/server/config';
+import { orExit } from '../src/lib/server/config-error';
+import { checkStorage, closeStorage } from '../src/lib/server/storage/select';
 import { createBackup } from './lib/backup';
 
 if (config.database.kind !== 'sqlite') {
@@ -18,21 +21,28 @@ function argValue(name: string): string | undefined {
 
 const stamp = new Date().toISOString().replace(/[:.]/g, '-');
 const outDir = resolve(argValue('--out') ?? join('backups', `beadline-${stamp}`));
+const uploads = await orExit(checkStorage);
 const m = await createBackup({
 	databaseFile: config.databaseFile,
 	uploadsDir: config.uploadsDir,
+	uploads,
 	outDir
 });
+await closeStorage();
 const rows = Object.values(m.database.tables).reduce((n, t) => n + t.rows, 0);
 console.log(`Backup written to ${outDir} in ${m.seconds.toFixed(2)} s`);
 console.log(
 	`  database: ${(m.database.bytes / 1048576).toFixed(1)} MB, ${Object.keys(m.database.tables).length} tables, ${rows} rows, sha256 ${m.database.sha256.slice(0, 16)}…`
 );
 console.log(
-	`  uploads: ${m.uploads.files.length} files, ${(m.uploads.bytes / 1048576).toFixed(1)} MB; ${m.uploads.referenced} referenced by the database`
+	`  uploads: ${m.uploads.files.length} files copied from ${uploads.where}, ${(m.uploads.bytes / 1048576).toFixed(1)} MB; ${m.uploads.referenced} referenced by the database`
 );
+if (uploads.kind === 's3')
+	console.log(
+		'  (STORAGE=s3: every object was downloaded into this folder; bucket versioning is not a backup of the database.)'
+	);
 if (m.uploads.missing.length) {
-	// The backup is kept, but a file the data names was already gone from UPLOADS_DIR.
-	console.error(`  MISSING from UPLOADS_DIR: ${m.uploads.missing.join(', ')}`);
+	// The backup is kept, but a file the data names was already gone from the store.
+	console.error(`  MISSING from ${uploads.where}: ${m.uploads.missing.join(', ')}`);
 	process.exit(2);
 }

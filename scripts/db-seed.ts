@@ -15,7 +15,12 @@ if (refusal) {
 
 const { exitOnConfigError, migrate, sequelize } = await import('../src/lib/server/db');
 const { seedDemo } = await import('../src/lib/server/seed/seed-demo');
+const { orExit } = await import('../src/lib/server/config-error');
+const { checkStorage, closeStorage } = await import('../src/lib/server/storage/select');
 await migrate().catch(exitOnConfigError);
+// The demo's photos and reports go to the store: a bad bucket stops here with one sentence.
+await orExit(checkStorage);
 const { shop, other } = await seedDemo();
 console.log(`Seeded ${shop.name} and ${other.name}.`);
+await closeStorage();
 await sequelize.close();

@@ -3,6 +3,7 @@
 import { execSync, spawnSync } from 'node:child_process';
 import { existsSync } from 'node:fs';
 import { postgresBinDir } from './lib/postgres';
+import { unexpectedBuildLines } from './lib/build-output';
 
 const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
 
@@ -60,10 +61,24 @@ const started = Date.now();
 for (const [name, [cmd, ...args]] of steps) {
 	const t = Date.now();
 	console.log(`\n▶ ${name}: ${[cmd, ...args].join(' ')}`);
-	const r = spawnSync(cmd!, args, { stdio: 'inherit', env: { ...process.env, FORCE_COLOR: '0' } });
+	const env = { ...process.env, FORCE_COLOR: '0' };
+	// The build's output is read, not only shown: a build that warns fails like one that errs.
+	const quiet = name === 'build';
+	const r = spawnSync(cmd!, args, {
+		stdio: quiet ? 'pipe' : 'inherit',
+		encoding: 'utf8',
+		maxBuffer: 64 * 1024 * 1024,
+		env
+	});
+	if (quiet) process.stdout.write(`${r.stdout ?? ''}${r.stderr ?? ''}`);
 	if (r.status !== 0) {
 		console.error(`\n✖ ${name} failed (exit ${r.status ?? r.signal}).`);
 		process.exit(r.status ?? 1);
+	}
+	const noise = quiet ? unexpectedBuildLines(`${r.stdout ?? ''}\n${r.stderr ?? ''}`) : [];
+	if (noise.length) {
+		console.error(`\n✖ ${name} printed ${noise.length} line(s) of warnings:\n${noise.join('\n')}`);
+		process.exit(1);
 	}
 	console.log(`✔ ${name} in ${((Date.now() - t) / 1000).toFixed(0)} s`);
 }

@@ -9,7 +9,7 @@ declare global {
 			ref?: string;
 		}
 		interface Locals {
-			/** The signed-in member, re-read from the database on every request; null when signed out. */
+			/** The signed-in member, checked against the database on every request; null when signed out. */
 			user: SessionUser | null;
 		}
 		// interface PageData {}

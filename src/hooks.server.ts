@@ -1,6 +1,5 @@
-import type { Handle, HandleServerError, ServerInit } from '@sveltejs/kit';
+import type { Handle, HandleServerError, RequestEvent, ServerInit } from '@sveltejs/kit';
 import { sequence } from '@sveltejs/kit/hooks';
-import { authHandle } from '$lib/server/auth/auth-js';
 import { currentMember } from '$lib/server/auth/current-member';
 import { exitOnConfigError, migrate } from '$lib/server/db';
 import { publicError } from '$lib/server/public-error';
@@ -40,8 +39,26 @@ const securityHeaders: Handle = async ({ event, resolve }) => {
 const FIRST_PAINT_FONTS =
 	/atkinson-hyperlegible-(next|mono)-latin-(400|700)-normal\.[\w-]+\.woff2$/;
 
+/**
+ * Auth.js itself only where a session begins or ends: its own routes under /auth (the e-mail
+ * link's callback, sign-out, its CSRF token). The sign-in and sign-out actions call it directly.
+ */
+const authJs: Handle = async ({ event, resolve }) => {
+	if (!event.url.pathname.startsWith('/auth/')) return resolve(event);
+	// Loaded at the first such request: a process that only serves pages never holds Auth.js.
+	const { authHandle } = await import('$lib/server/auth/auth-js');
+	return authHandle({ event, resolve });
+};
+
+/** Requests no session can change: health, Kit's static files, and API calls with a token. */
+function sessionless(event: RequestEvent): boolean {
+	const path = event.url.pathname;
+	if (path === '/api/v1/health' || path.startsWith('/_app/')) return true;
+	return path.startsWith('/api/') && event.request.headers.has('authorization');
+}
+
 const member: Handle = async ({ event, resolve }) => {
-	event.locals.user = await currentMember(event);
+	event.locals.user = sessionless(event) ? null : await currentMember(event);
 	const response = await resolve(event, {
 		preload: ({ type, path }) =>
 			type === 'js' || type === 'css' || (type === 'font' && FIRST_PAINT_FONTS.test(path))
@@ -53,7 +70,7 @@ const member: Handle = async ({ event, resolve }) => {
 	return response;
 };
 
-export const handle = sequence(securityHeaders, authHandle, member);
+export const handle = sequence(securityHeaders, authJs, member);
 
 export const handleError: HandleServerError = ({ error, status, message }) =>
 	publicError(error, status, message);

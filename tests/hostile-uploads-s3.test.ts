@@ -83,7 +83,5 @@ test('a missing bucket stops the server with one sentence naming S3_BUCKET', asy
 	child.stderr.on('data', (d: Buffer) => (stderr += d.toString()));
 	const status = await new Promise<number | null>((resolve) => child.once('exit', resolve));
 	expect(status).toBe(1);
-	expect(stderr.trim()).toBe(
-		`Beadline cannot start: S3_BUCKET "not-there" does not exist at ${fake.endpoint}.`
-	);
+	expect(stderr.trim()).toBe(`S3_BUCKET "not-there" does not exist at ${fake.endpoint}.`);
 });

@@ -23,6 +23,7 @@ export interface Timing {
 	n: number;
 	medianMs: number;
 	p95Ms: number;
+	p99Ms: number;
 	status: number;
 }
 
@@ -46,7 +47,13 @@ export async function timeSequential(
 	}
 	ms.sort((a, b) => a - b);
 	const round = (x: number) => Math.round(x * 10) / 10;
-	return { n, medianMs: round(quantile(ms, 0.5)), p95Ms: round(quantile(ms, 0.95)), status };
+	return {
+		n,
+		medianMs: round(quantile(ms, 0.5)),
+		p95Ms: round(quantile(ms, 0.95)),
+		p99Ms: round(quantile(ms, 0.99)),
+		status
+	};
 }
 
 export async function waitFor(url: string, timeoutMs = 60_000): Promise<void> {

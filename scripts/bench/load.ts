@@ -3,6 +3,8 @@
 import autocannon from 'autocannon';
 
 export interface Route {
+	/** Short key the goals look the route up by. */
+	id?: string;
 	name: string;
 	path: string;
 	method?: 'GET' | 'POST';
@@ -11,6 +13,7 @@ export interface Route {
 }
 
 export interface LoadResult {
+	id?: string;
 	name: string;
 	path: string;
 	method: string;
@@ -37,6 +40,7 @@ export async function load(
 		connections: opts.connections
 	});
 	return {
+		id: route.id,
 		name: route.name,
 		path: route.path,
 		method: route.method ?? 'GET',

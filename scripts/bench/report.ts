@@ -1,6 +1,8 @@
 // Prints the bench's figures as plain tables and writes the same figures as JSON.
 import { mkdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
+import type { PageJs } from './client-js';
+import type { GoalRow } from './goals';
 import type { PageAudit } from './lighthouse';
 import type { LoadResult } from './load';
 import type { Timing } from './http';
@@ -14,11 +16,23 @@ export interface GrowthRow {
 
 export interface BenchFigures {
 	at: string;
+	/** The machine's load average (1, 5, 15 min) at the end: other work shares the cores. */
+	load: number[];
 	machine: { node: string; cores: number; platform: string };
 	settings: { seconds: number; connections: number };
 	data: Record<string, number>;
+	/** The bare SvelteKit probe app: every route's share is of this. */
+	probe: LoadResult;
 	routes: LoadResult[];
 	growth: GrowthRow[];
+	mixed: {
+		requests: number;
+		non2xx: number;
+		errors: number;
+		rss: { afterMb: number; peakMb: number };
+	};
+	js?: PageJs[];
+	goals: GoalRow[];
 	sheets?: SheetFigures;
 	lighthouse?: PageAudit[];
 	rss: { afterMb: number; peakMb: number };
@@ -31,7 +45,9 @@ const lpad = (s: unknown, n: number) => String(s).padStart(n);
 export function printFigures(f: BenchFigures): void {
 	const line = (cells: [unknown, number, boolean?][]) =>
 		console.log(cells.map(([c, n, left]) => (left ? pad(c, n) : lpad(c, n))).join('  '));
-	console.log(`\nBeadline bench ${f.at} — Node ${f.machine.node}, ${f.machine.cores} cores`);
+	console.log(
+		`\nBeadline bench ${f.at} — Node ${f.machine.node}, ${f.machine.cores} cores, load average ${f.load.join(' / ')}`
+	);
 	console.log(
 		`Each route: ${f.settings.seconds} s with ${f.settings.connections} connections (autocannon), one server, one run.`
 	);
@@ -47,9 +63,9 @@ export function printFigures(f: BenchFigures): void {
 		['p99 ms', 7],
 		['errors', 7],
 		['non-2xx', 7],
-		['vs bare', 8]
+		['vs probe', 8]
 	]);
-	for (const r of f.routes)
+	for (const r of [f.probe, ...f.routes])
 		line([
 			[`${r.method} ${r.name}`, 44, true],
 			[r.reqPerSec, 7],
@@ -57,21 +73,47 @@ export function printFigures(f: BenchFigures): void {
 			[r.p99Ms, 7],
 			[r.errors, 7],
 			[r.non2xx, 7],
-			[r.ratioToBare === undefined ? '' : `${(r.ratioToBare * 100).toFixed(1)} %`, 8]
+			[`${((r.ratioToBare ?? 1) * 100).toFixed(1)} %`, 8]
 		]);
 
-	console.log('\nList latency as a shop’s records grow (one request at a time; median / p95 ms)');
+	console.log(
+		'\nList latency as a shop’s records grow (one request at a time; median / p95 / p99 ms)'
+	);
 	line([
 		['records in shop', 16, true],
-		['/records', 16],
-		['/records?filter', 18]
+		['/records', 20],
+		['/records?filter', 20]
 	]);
+	const t = (x: Timing) => `${x.medianMs} / ${x.p95Ms} / ${x.p99Ms}`;
 	for (const g of f.growth)
 		line([
 			[g.records.toLocaleString('en-US'), 16, true],
-			[`${g.list.medianMs} / ${g.list.p95Ms}`, 16],
-			[`${g.filtered.medianMs} / ${g.filtered.p95Ms}`, 18]
+			[t(g.list), 20],
+			[t(g.filtered), 20]
 		]);
+
+	const m = f.mixed;
+	console.log(
+		`\n${m.requests.toLocaleString('en-US')} mixed requests (every route above in turn): ${m.non2xx} non-2xx, ${m.errors} errors; RSS after ${m.rss.afterMb} MB`
+	);
+	if (f.js?.length) {
+		console.log('\nJavaScript each page loads in Chromium (compressed bytes as served)');
+		line([
+			['page', 22, true],
+			['path', 40, true],
+			['files', 6],
+			['KB', 7],
+			['QR decoder', 11]
+		]);
+		for (const p of f.js)
+			line([
+				[p.name, 22, true],
+				[p.path.length > 40 ? p.path.slice(0, 37) + '…' : p.path, 40, true],
+				[p.files, 6],
+				[p.kb, 7],
+				[p.qrDecoder ? 'yes' : 'no', 11]
+			]);
+	}
 
 	if (f.sheets)
 		console.log(

@@ -2,9 +2,12 @@
 // server may keep running) and the uploads folder, with a manifest of SHA-256s, row counts and a
 // digest of every table, so that a restore can prove it brought back exactly what was saved.
 import { createHash } from 'node:crypto';
-import { createReadStream, existsSync } from 'node:fs';
+import { createReadStream, createWriteStream, existsSync } from 'node:fs';
 import { copyFile, mkdir, readdir, readFile, rename, stat, writeFile } from 'node:fs/promises';
 import { dirname, join, relative, sep } from 'node:path';
+import { pipeline } from 'node:stream/promises';
+import type { StorageBackend } from '../../src/lib/server/storage/backend';
+import { LocalStorage } from '../../src/lib/server/storage/local';
 import { backupTo, inUse, openSqlite, type SqliteFile } from './sqlite-file';
 
 export const MANIFEST = 'manifest.json';
@@ -104,13 +107,32 @@ export async function integrity(db: SqliteFile): Promise<string[]> {
 	return [...problems, ...fk.map((r) => `foreign key: ${JSON.stringify(r)}`)];
 }
 
+/** Every object of a store, copied into `dir` under its name (the same layout as UPLOADS_DIR). */
+async function copyObjects(store: StorageBackend, dir: string): Promise<FileEntry[]> {
+	const files: FileEntry[] = [];
+	for await (const o of store.list()) {
+		// In-flight writes and the start-up check's probe were never anyone's upload.
+		if (o.name.endsWith('.part') || o.name.startsWith('beadline-check/')) continue;
+		const found = await store.get(o.name);
+		if (!found) continue; // removed meanwhile
+		const to = join(dir, ...o.name.split('/'));
+		await mkdir(dirname(to), { recursive: true });
+		await pipeline(found.body, createWriteStream(to));
+		files.push({ path: o.name, bytes: (await stat(to)).size, sha256: await sha256File(to) });
+	}
+	return files.sort((a, b) => (a.path < b.path ? -1 : 1));
+}
+
 /**
- * Snapshot first, uploads second: an upload is on disk before the row that names it commits,
- * so every upload the snapshot refers to already exists when the folder is copied.
+ * Snapshot first, uploads second: an upload is stored before the row that names it commits,
+ * so every upload the snapshot refers to already exists when the store is copied. With
+ * STORAGE=s3 the bucket's objects are copied into the backup folder just the same.
  */
 export async function createBackup(opts: {
 	databaseFile: string;
+	/** The local folder; ignored when `uploads` is given. */
 	uploadsDir: string;
+	uploads?: StorageBackend;
 	outDir: string;
 }): Promise<Manifest> {
 	const started = Date.now();
@@ -135,13 +157,10 @@ export async function createBackup(opts: {
 		await db.close();
 	}
 
-	const files: FileEntry[] = [];
-	for (const path of await listFiles(opts.uploadsDir)) {
-		const to = join(opts.outDir, 'uploads', path);
-		await mkdir(dirname(to), { recursive: true });
-		await copyFile(join(opts.uploadsDir, path), to);
-		files.push({ path, bytes: (await stat(to)).size, sha256: await sha256File(to) });
-	}
+	const files = await copyObjects(
+		opts.uploads ?? new LocalStorage(opts.uploadsDir),
+		join(opts.outDir, 'uploads')
+	);
 	const copied = new Set(files.map((f) => keyOfPath(f.path)));
 	const manifest: Manifest = {
 		format: 1,
@@ -223,6 +242,8 @@ export async function restoreBackup(opts: {
 	dir: string;
 	databaseFile: string;
 	uploadsDir: string;
+	/** A bucket (STORAGE=s3): the backup's objects are put back; nothing in it is removed. */
+	bucket?: StorageBackend;
 	force?: boolean;
 }): Promise<RestoreResult> {
 	const manifest = await readManifest(opts.dir);
@@ -238,7 +259,7 @@ export async function restoreBackup(opts: {
 		const to = await moveAside(path, stamp);
 		if (to) movedAside.push(to);
 	}
-	const uploadsAside = await moveAside(opts.uploadsDir, stamp);
+	const uploadsAside = opts.bucket ? null : await moveAside(opts.uploadsDir, stamp);
 	if (uploadsAside) movedAside.push(uploadsAside);
 
 	await mkdir(dirname(opts.databaseFile), { recursive: true });
@@ -246,11 +267,16 @@ export async function restoreBackup(opts: {
 	await copyFile(join(opts.dir, manifest.database.file), temp);
 	await rename(temp, opts.databaseFile);
 	for (const f of manifest.uploads.files) {
+		const from = join(opts.dir, 'uploads', f.path);
+		if (opts.bucket) {
+			await opts.bucket.put(f.path, createReadStream(from));
+			continue;
+		}
 		const to = join(opts.uploadsDir, f.path);
 		await mkdir(dirname(to), { recursive: true });
-		await copyFile(join(opts.dir, 'uploads', f.path), to);
+		await copyFile(from, to);
 	}
-	await mkdir(opts.uploadsDir, { recursive: true });
+	if (!opts.bucket) await mkdir(opts.uploadsDir, { recursive: true });
 
 	const db = await openSqlite(opts.databaseFile, { mustExist: true });
 	try {

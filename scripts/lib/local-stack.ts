@@ -33,8 +33,13 @@ export async function prepareDatabase(opts: { seed: boolean }): Promise<void> {
 	const { exitOnConfigError, migrate, sequelize } = await import('../../src/lib/server/db');
 	await migrate().catch(exitOnConfigError);
 	if (opts.seed) {
+		const { orExit } = await import('../../src/lib/server/config-error');
+		const { checkStorage, closeStorage } = await import('../../src/lib/server/storage/select');
+		// The demo's photos and reports go to the store: a bad bucket stops here, in one sentence.
+		await orExit(checkStorage);
 		const { seedDemo } = await import('../../src/lib/server/seed/seed-demo');
 		await seedDemo();
+		await closeStorage();
 	}
 	await sequelize.close();
 }

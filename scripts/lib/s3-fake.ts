@@ -20,8 +20,6 @@ export interface S3Fake {
 export async function startS3Fake(
 	opts: { bucket?: string; buckets?: string[]; directory?: string } = {}
 ): Promise<S3Fake> {
-	// The SDK's notice that its 2027 releases need Node 22 is true, but noise in every test run.
-	process.env.AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED ??= 'true';
 	const bucket = opts.bucket ?? 'beadline-test';
 	const directory = opts.directory ?? mkdtempSync(join(tmpdir(), 'beadline-s3-'));
 	const server = new S3rver({
@@ -44,8 +42,7 @@ export async function startS3Fake(
 			S3_ENDPOINT: endpoint,
 			S3_ACCESS_KEY_ID: FAKE_KEY,
 			S3_SECRET_ACCESS_KEY: FAKE_KEY,
-			S3_FORCE_PATH_STYLE: 'true',
-			AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: 'true'
+			S3_FORCE_PATH_STYLE: 'true'
 		},
 		async close() {
 			await server.close();

@@ -1,6 +1,6 @@
 // A production server of the test's own, on a throw-away data folder, for the tests that must
 // kill, restart or restore it (the shared end-to-end server must stay up for everyone else).
-import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
+import { spawn, type ChildProcess } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
@@ -69,11 +69,15 @@ export async function ownServer(
 		BOOTH_LIMIT_IP_PER_MINUTE: '100000',
 		...opts.env
 	};
-	const prep = spawnSync(process.execPath, ['--import', 'tsx', 'tests/support/prepare-data.ts'], {
+	// Not spawnSync: a bucket the seed writes to (s3rver) may be answering from this process.
+	const prep = spawn(process.execPath, ['--import', 'tsx', 'tests/support/prepare-data.ts'], {
 		env,
-		encoding: 'utf8'
+		stdio: ['ignore', 'ignore', 'pipe']
 	});
-	if (prep.status !== 0) throw new Error(`Preparing ${dataDir} failed: ${prep.stderr}`);
+	let prepErr = '';
+	prep.stderr.on('data', (d: Buffer) => (prepErr += d.toString()));
+	const status = await new Promise<number | null>((r) => prep.once('exit', r));
+	if (status !== 0) throw new Error(`Preparing ${dataDir} failed: ${prepErr}`);
 	const catcher: SMTPServer = await startMailCatcher({
 		port: smtpPort,
 		dir: env.MAIL_CATCHER_DIR!

@@ -1,6 +1,6 @@
 import { redirect } from '@sveltejs/kit';
 import { fail, message, superValidate } from 'sveltekit-superforms';
-import { zod4 } from 'sveltekit-superforms/adapters';
+import { zod4 } from '$lib/forms/zod4';
 import { currentMember } from '$lib/server/auth/current-member';
 import { requireMember } from '$lib/server/auth/guards';
 import { refuseForm } from '$lib/server/people/form-errors';

@@ -1,6 +1,6 @@
 import { redirect } from '@sveltejs/kit';
 import { fail, message, superValidate } from 'sveltekit-superforms';
-import { zod4 } from 'sveltekit-superforms/adapters';
+import { zod4 } from '$lib/forms/zod4';
 import { authSignIn } from '$lib/server/auth/auth-js';
 import { verifyPassword } from '$lib/server/auth/password';
 import { clearFailures, isLockedOut, recordFailure } from '$lib/server/auth/failed-sign-ins';

@@ -1,6 +1,6 @@
 import { redirect } from '@sveltejs/kit';
 import { fail, message, superValidate } from 'sveltekit-superforms';
-import { zod4 } from 'sveltekit-superforms/adapters';
+import { zod4 } from '$lib/forms/zod4';
 import { formLimiter } from '$lib/server/auth/rate-limit';
 import { createShop } from '$lib/server/people/create-shop';
 import { refuseForm } from '$lib/server/people/form-errors';

@@ -1,11 +1,12 @@
 import type { RequestEvent } from '@sveltejs/kit';
 import { createHash, randomBytes } from 'node:crypto';
-import { Op } from 'sequelize';
+import { Op, QueryTypes } from 'sequelize';
 import type { Role } from '$lib/roles';
 import { audit } from '../audit';
 import type { SessionUser } from '../auth/session-user';
+import { sequelize } from '../db/sequelize';
 import { write } from '../db/write-queue';
-import { ApiToken, Shop, User } from '../models';
+import { ApiToken, User } from '../models';
 
 const PREFIX = 'bl_';
 /** Writing last-used on every call would make each read a write; once a minute is plenty. */
@@ -91,18 +92,37 @@ export function listApiTokens(shopId: number) {
 	});
 }
 
+interface TokenRow {
+	id: number;
+	name: string;
+	role: Exclude<Role, 'admin'>;
+	last_used_at: string | Date | null;
+	shop_id: number;
+	shop_name: string;
+	unit_system: SessionUser['unitSystem'];
+	user_id: string;
+	email: string;
+	active: boolean | number;
+}
+
+// One indexed lookup (token_hash is unique) with its shop and creator, as plain rows: this runs
+// on every API call, and nothing here is saved back through a model.
+const TOKEN_SQL = `SELECT t.id, t.name, t.role, t.last_used_at, s.id AS shop_id,
+	s.name AS shop_name, s.unit_system, u.id AS user_id, u.email, u.active
+	FROM api_tokens t JOIN shops s ON s.id = t.shop_id JOIN users u ON u.id = t.created_by_id
+	WHERE t.token_hash = ? AND t.revoked_at IS NULL`;
+
 /** The member a bearer token acts as, or null for an unknown, revoked or malformed token. */
 export async function memberForToken(secret: string): Promise<SessionUser | null> {
 	if (!secret.startsWith(PREFIX) || secret.length > 100) return null;
-	const token = await ApiToken.findOne({
-		where: { tokenHash: hashToken(secret), revokedAt: null },
-		include: [Shop, { model: User, as: 'createdBy' }]
+	const [token] = await sequelize.query<TokenRow>(TOKEN_SQL, {
+		replacements: [hashToken(secret)],
+		type: QueryTypes.SELECT
 	});
-	const shop = (token as (ApiToken & { Shop?: Shop }) | null)?.Shop;
-	const creator = (token as (ApiToken & { createdBy?: User }) | null)?.createdBy;
-	if (!token || !shop || !creator?.active) return null;
+	if (!token || !token.active) return null;
 	const now = Date.now();
-	if (!token.lastUsedAt || now - token.lastUsedAt.getTime() > LAST_USED_GRANULARITY_MS) {
+	const lastUsed = token.last_used_at ? new Date(token.last_used_at).getTime() : 0;
+	if (now - lastUsed > LAST_USED_GRANULARITY_MS) {
 		await write((t) =>
 			ApiToken.update(
 				{ lastUsedAt: new Date(now) },
@@ -120,12 +140,12 @@ export async function memberForToken(secret: string): Promise<SessionUser | null
 		);
 	}
 	return {
-		id: creator.id,
-		shopId: shop.id,
-		shopName: shop.name,
+		id: token.user_id,
+		shopId: Number(token.shop_id),
+		shopName: token.shop_name,
 		name: `${token.name} (API token)`,
-		email: creator.email,
+		email: token.email,
 		role: token.role,
-		unitSystem: shop.unitSystem
+		unitSystem: token.unit_system
 	};
 }

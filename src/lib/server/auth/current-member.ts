@@ -1,29 +1,21 @@
 import type { RequestEvent } from '@sveltejs/kit';
-import { Shop, User } from '../models';
+import { memberFor } from './member-cache';
+import { SESSION_COOKIES, sessionClaims } from './session-token';
 import type { SessionUser } from './session-user';
 
-const SESSION_COOKIES = ['authjs.session-token', '__Secure-authjs.session-token'];
-
 /**
- * Re-reads the member behind the Auth.js token on every request: a disabled member, or a token
- * older than the member's session version ("sign out everywhere"), is signed out right here.
+ * The member behind the session cookie, checked against the database on every request: a
+ * disabled member, or a token older than the member's session version ("sign out everywhere"),
+ * is signed out right here. Nothing else sets a cookie, so answers to a signed-in member's
+ * ordinary requests carry no Set-Cookie.
  */
 export async function currentMember(event: RequestEvent): Promise<SessionUser | null> {
-	const session = (await event.locals.auth()) as { uid?: string; sv?: number } | null;
-	if (!session?.uid) return null;
-	const user = await User.findByPk(session.uid, { include: [Shop] });
-	const shop = (user as (User & { Shop?: Shop }) | null)?.Shop;
-	if (!user || !shop || !user.active || user.sessionVersion !== session.sv) {
-		for (const name of SESSION_COOKIES) event.cookies.delete(name, { path: '/' });
-		return null;
+	const claims = await sessionClaims(event.cookies);
+	const member = claims && (await memberFor(claims.uid, claims.sv));
+	if (!member) {
+		// A dead or unreadable token is cleared; a request that brought none gets no cookie.
+		for (const name of SESSION_COOKIES)
+			if (event.cookies.get(name)) event.cookies.delete(name, { path: '/' });
 	}
-	return {
-		id: user.id,
-		shopId: shop.id,
-		shopName: shop.name,
-		name: user.name,
-		email: user.email,
-		role: user.role,
-		unitSystem: user.unitSystem ?? shop.unitSystem
-	};
+	return member ?? null;
 }

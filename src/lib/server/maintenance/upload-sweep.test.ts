@@ -3,6 +3,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import sharp from 'sharp';
 import { beforeAll, describe, expect, it } from 'vitest';
+import { startS3Fake } from '../../../../scripts/lib/s3-fake';
 
 const dir = mkdtempSync(join(tmpdir(), 'beadline-sweep-'));
 process.env.DATABASE_FILE = join(dir, 'test.sqlite');
@@ -13,6 +14,9 @@ const { newShop, addMember } = await import('../people/test-support');
 const { createRecord } = await import('../records');
 const { settingsRecordSchema } = await import('$lib/schemas/settings-record');
 const { sweepUploads, ORPHANED_DIR } = await import('./upload-sweep');
+const { S3Storage } = await import('../storage/s3');
+const { s3Settings } = await import('../storage/s3-settings');
+const { objectName } = await import('../storage/backend');
 
 const up = (name: string) => join(dir, 'uploads', name.slice(0, 2), name);
 const hour = (n: number) => new Date(Date.now() + n * 3_600_000);
@@ -54,5 +58,38 @@ describe('sweepUploads', () => {
 		expect(existsSync(aside)).toBe(true);
 		// A second start finds nothing more to move.
 		expect(await sweepUploads(new Date())).toEqual({ partial: [], orphaned: [] });
+	});
+
+	it('in a bucket, moves an unreferenced object only once it is 15 minutes older than the start', async () => {
+		const fake = await startS3Fake();
+		const bucket = new S3Storage(
+			s3Settings({
+				bucket: fake.bucket,
+				region: '',
+				endpoint: fake.endpoint,
+				accessKeyId: 'S3RVER',
+				secretAccessKey: 'S3RVER',
+				forcePathStyle: ''
+			})
+		);
+		try {
+			const orphan = `${'9a'.repeat(16)}.jpg`;
+			for (const k of [orphan, ...kept]) await bucket.put(objectName(k), Buffer.from('x'));
+			// Just written: another process may be about to commit the row that names it.
+			expect(await sweepUploads(new Date(), bucket)).toEqual({ partial: [], orphaned: [] });
+			const later = new Date(Date.now() + 16 * 60_000);
+			expect(await sweepUploads(later, bucket)).toEqual({ partial: [], orphaned: [orphan] });
+			const names: string[] = [];
+			for await (const o of bucket.list()) names.push(o.name);
+			expect(names.sort()).toEqual(
+				[
+					...kept.map((k) => objectName(k)),
+					`${ORPHANED_DIR}/${later.toISOString().replace(/[:.]/g, '-')}/${orphan}`
+				].sort()
+			);
+		} finally {
+			await bucket.close();
+			await fake.close();
+		}
 	});
 });

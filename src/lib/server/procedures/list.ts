@@ -45,7 +45,21 @@ export async function listProcedures(
 			['id', 'ASC']
 		],
 		limit: PAGE_SIZE,
-		offset: (f.page - 1) * PAGE_SIZE
+		offset: (f.page - 1) * PAGE_SIZE,
+		// Only the columns the list shows, as plain rows: nothing here is saved back.
+		attributes: [
+			'id',
+			'number',
+			'title',
+			'code',
+			'process',
+			'baseMetalFamily',
+			'state',
+			'headRev',
+			'approvedRev',
+			'updatedAt'
+		],
+		raw: true
 	});
 	return {
 		rows: rows.map((p) => ({
@@ -58,7 +72,8 @@ export async function listProcedures(
 			state: p.state as RevisionStateId,
 			headRev: p.headRev,
 			approvedRev: p.approvedRev ?? null,
-			updatedAt: p.updatedAt.toISOString()
+			// A plain row's date is the driver's: text on SQLite, a Date on PostgreSQL.
+			updatedAt: new Date(p.updatedAt).toISOString()
 		})),
 		total: count,
 		page: f.page,

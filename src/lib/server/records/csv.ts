@@ -4,7 +4,8 @@ import type { RecordFilterInput } from '$lib/schemas/settings-record';
 import { numericIn } from '$lib/records/display';
 import type { SessionUser } from '../auth/session-user';
 import { SettingsRecord } from '../models';
-import { authorNames, orderFor, resolveFilters } from './list';
+import { authorNames } from './choices';
+import { orderFor, resolveFilters } from './list';
 
 const BATCH = 1000;
 

@@ -3,7 +3,8 @@ export { canEdit, CREATE_ROLES, isFrozen, VIEW_ROLES } from './access';
 export { compareIds, compareRecords, COMPARE_MAX } from './compare';
 export { recordsCsv } from './csv';
 export { recordJson } from './json';
-export { authorNames, fillersInUse, listRecords, PAGE_SIZE, plotPoints, walkInOrder } from './list';
+export { authorNames, fillersInUse } from './choices';
+export { listRecords, PAGE_SIZE, plotPoints, walkInOrder } from './list';
 export { MAX_PHOTOS, photosFrom } from './photos';
 export { getRecord, recordHistory, type RecordView } from './read';
 export {

@@ -140,6 +140,13 @@ describe('records list filters (own shop only)', () => {
 		expect(await listed('q=bracket nowhere')).toEqual([]);
 	});
 
+	it('finds words inside words, short words and quotes without error (FTS5 trigram index)', async () => {
+		expect(await listed('q=racke')).toEqual([ids.trailer, ids.frame]); // a substring, like LIKE gave
+		expect(sorted(await listed('q=er70s-2 1g'))).toEqual([ids.frame]); // 1g: under three letters
+		expect(await listed('q=%22bracket')).toEqual([]); // a double quote is text, not syntax
+		expect(await listed('q=OR NOT')).toEqual([]); // FTS5 operators are words too
+	});
+
 	it('sorts by amps both ways', async () => {
 		const up = [ids.rail, ids.gusset, ids.frame, ids.trailer]; // 90, 110, 120, 160 A
 		expect(await listed('sort=amps&dir=asc')).toEqual(up);

@@ -5,8 +5,10 @@ import { parseLength, type UnitSystem } from '$lib/weld';
 import type { RecordFilterInput } from '$lib/schemas/settings-record';
 import type { SessionUser } from '../auth/session-user';
 import { sequelize } from '../db/sequelize';
-import { likeOp, unindexedTerm } from '../db/dialect';
-import { SettingsRecord, User } from '../models';
+import { unindexedTerm } from '../db/dialect';
+import { SettingsRecord } from '../models';
+import { authorNames } from './choices';
+import { searchTerms } from './search';
 
 export const PAGE_SIZE = 25;
 /** A typed 1/8 in is 3.175 mm; stored values may differ in the last digits. */
@@ -60,11 +62,7 @@ export function resolveFilters(
 			key === 'tmin' ? { [Op.gte]: r.mm - EPSILON_MM } : { [Op.lte]: r.mm + EPSILON_MM }
 		);
 	}
-	if (f.q) {
-		// Every word must appear; '%' is dropped (SQLite's LIKE has no escape unless asked for one).
-		const words = f.q.toLowerCase().replace(/%/g, '').split(/\s+/).filter(Boolean).slice(0, 5);
-		for (const w of words) and.push({ searchText: { [likeOp(sequelize)]: `%${w}%` } });
-	}
+	if (f.q) and.push(...searchTerms(f.q));
 	return { where: { [Op.and]: and }, problems };
 }
 
@@ -164,7 +162,9 @@ export async function listRecords(
 			'cautionCount',
 			'jobRef',
 			'authorId'
-		]
+		],
+		// Plain rows: the list saves nothing, so no model instances are built.
+		raw: true
 	});
 	const names = await authorNames(actor.shopId);
 	const list: ListRow[] = rows.map((r) => ({
@@ -184,29 +184,6 @@ export async function listRecords(
 		author: names.get(r.authorId) ?? 'former member'
 	}));
 	return { rows: list, total, page, pages, problems };
-}
-
-/** Names of the shop's people, for the author column and the author filter. */
-export async function authorNames(shopId: number): Promise<Map<string, string>> {
-	const people = await User.findAll({
-		where: { shopId },
-		attributes: ['id', 'name'],
-		order: [['name', 'ASC']]
-	});
-	return new Map(people.map((p) => [p.id, p.name]));
-}
-
-/** The shop's fillers in use, for the filter's choices. */
-export async function fillersInUse(shopId: number): Promise<string[]> {
-	const rows = await SettingsRecord.findAll({
-		where: { shopId, fillerClass: { [Op.ne]: null } },
-		attributes: ['fillerClass'],
-		group: ['fillerClass'],
-		order: [['fillerClass', 'ASC']],
-		limit: 200,
-		raw: true
-	});
-	return rows.map((r) => r.fillerClass).filter((x): x is string => !!x);
 }
 
 export const PLOT_LIMIT = 2000;

@@ -4,7 +4,7 @@
 // whole or not at all.
 import { randomBytes } from 'node:crypto';
 import { Readable } from 'node:stream';
-import sharp, { type OutputInfo } from 'sharp';
+import type { OutputInfo } from 'sharp';
 import { KEY, objectName, readAll } from './backend';
 import { storage } from './select';
 import { EXTENSIONS, sniff, type UploadKind } from './sniff';
@@ -73,6 +73,8 @@ export async function saveUpload(bytes: Uint8Array, options: SaveOptions): Promi
 	}
 	let image: { data: Buffer; info: OutputInfo };
 	let thumb: Buffer;
+	// sharp (libvips: tens of MB resident) loads at the first image, not at start-up.
+	const { default: sharp } = await import('sharp');
 	try {
 		const base = sharp(bytes, { failOn: 'error', limitInputPixels: 80_000_000 })
 			.rotate()

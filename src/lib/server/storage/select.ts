@@ -38,3 +38,10 @@ export async function checkStorage(): Promise<StorageBackend> {
 	await backend.check();
 	return backend;
 }
+
+/** Lets go of the process's back end (scripts, before they end); the next use makes a new one. */
+export async function closeStorage(): Promise<void> {
+	const current = chosen;
+	chosen = null;
+	if (current) await (await current.backend.catch(() => null))?.close();
+}

@@ -1,5 +1,5 @@
 import { fail, message, superValidate } from 'sveltekit-superforms';
-import { zod4 } from 'sveltekit-superforms/adapters';
+import { zod4 } from '$lib/forms/zod4';
 import { requireRole } from '$lib/server/auth/guards';
 import { NotFoundError } from '$lib/server/people/errors';
 import { refuseForm, rethrowAsHttp } from '$lib/server/people/form-errors';

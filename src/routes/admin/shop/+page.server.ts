@@ -1,5 +1,5 @@
 import { fail, message, superValidate } from 'sveltekit-superforms';
-import { zod4 } from 'sveltekit-superforms/adapters';
+import { zod4 } from '$lib/forms/zod4';
 import { currentMember } from '$lib/server/auth/current-member';
 import { requireRole } from '$lib/server/auth/guards';
 import { refuseForm, rethrowAsHttp } from '$lib/server/people/form-errors';

@@ -1,5 +1,5 @@
 import { fail, message, superValidate } from 'sveltekit-superforms';
-import { zod4 } from 'sveltekit-superforms/adapters';
+import { zod4 } from '$lib/forms/zod4';
 import { createApiToken, listApiTokens, revokeApiToken } from '$lib/server/api/api-tokens';
 import { requireRole } from '$lib/server/auth/guards';
 import { apiTokenSchema, tokenIdSchema } from '$lib/schemas/account';

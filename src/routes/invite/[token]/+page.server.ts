@@ -1,6 +1,6 @@
 import { error, redirect, type RequestEvent } from '@sveltejs/kit';
 import { fail, message, superValidate } from 'sveltekit-superforms';
-import { zod4 } from 'sveltekit-superforms/adapters';
+import { zod4 } from '$lib/forms/zod4';
 import { formLimiter } from '$lib/server/auth/rate-limit';
 import { InviteGoneError } from '$lib/server/people/errors';
 import { refuseForm } from '$lib/server/people/form-errors';

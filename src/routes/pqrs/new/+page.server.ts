@@ -1,6 +1,6 @@
 import { redirect } from '@sveltejs/kit';
 import { fail, superValidate } from 'sveltekit-superforms';
-import { zod4 } from 'sveltekit-superforms/adapters';
+import { zod4 } from '$lib/forms/zod4';
 import { requireRole } from '$lib/server/auth/guards';
 import { AUTHOR_ROLES, nextNumber } from '$lib/server/procedures';
 import { createPqr } from '$lib/server/pqrs';

@@ -1,5 +1,5 @@
 import { fail, message, superValidate } from 'sveltekit-superforms';
-import { zod4 } from 'sveltekit-superforms/adapters';
+import { zod4 } from '$lib/forms/zod4';
 import { requireRole } from '$lib/server/auth/guards';
 import { patternsOf, setPatterns } from '$lib/server/procedures';
 import { applyPattern } from '$lib/server/procedures/numbering';

@@ -1,6 +1,6 @@
 import { fail, message, superValidate } from 'sveltekit-superforms';
 import { RefusedError } from '$lib/server/people/errors';
-import { zod4 } from 'sveltekit-superforms/adapters';
+import { zod4 } from '$lib/forms/zod4';
 import { requireRole } from '$lib/server/auth/guards';
 import { refuseForm, rethrowAsHttp } from '$lib/server/people/form-errors';
 import { MANAGE_ROLES, VIEW_ROLES } from '$lib/server/welders/access';

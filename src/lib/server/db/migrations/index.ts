@@ -6,6 +6,7 @@ import * as procedures from './0004-procedures';
 import * as welders from './0005-welders';
 import * as boothLinks from './0006-booth-links';
 import * as recordsFilterIndex from './0007-records-filter-index';
+import * as recordsSearch from './0009-records-search';
 
 export interface Migration {
 	name: string;
@@ -22,5 +23,6 @@ export const migrations: Migration[] = [
 	{ name: '0004-procedures', ...procedures },
 	{ name: '0005-welders', ...welders },
 	{ name: '0006-booth-links', ...boothLinks },
-	{ name: '0007-records-filter-index', ...recordsFilterIndex }
+	{ name: '0007-records-filter-index', ...recordsFilterIndex },
+	{ name: '0009-records-search', ...recordsSearch }
 ];

@@ -140,7 +140,21 @@ CREATE TABLE `sessions` (`id` UUID PRIMARY KEY, `expires` DATETIME NOT NULL, `se
 
 CREATE TABLE `settings_photos` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `record_id` INTEGER NOT NULL REFERENCES `settings_records` (`id`), `storage_key` VARCHAR(80) NOT NULL UNIQUE, `thumb_key` VARCHAR(80) NOT NULL, `mime` VARCHAR(40) NOT NULL, `original_name` VARCHAR(200) NOT NULL, `bytes` INTEGER NOT NULL, `width` INTEGER NOT NULL, `height` INTEGER NOT NULL, `uploaded_by_id` UUID NOT NULL REFERENCES `users` (`id`), `removed_at` DATETIME, `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL);
 
+CREATE TABLE settings_record_versions (
+		shop_id INTEGER PRIMARY KEY REFERENCES shops(id), version INTEGER NOT NULL);
+
 CREATE TABLE `settings_records` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `author_id` UUID NOT NULL REFERENCES `users` (`id`), `process` VARCHAR(8) NOT NULL, `current_type` VARCHAR(8), `transfer` VARCHAR(16), `amps` REAL, `volts` REAL, `wire_feed_mm_per_s` REAL, `travel_speed_mm_per_s` REAL, `filler_class` VARCHAR(40), `filler_diameter_mm` REAL, `tungsten_class` VARCHAR(20), `tungsten_diameter_mm` REAL, `gas_name` VARCHAR(60), `gas_flow_l_per_min` REAL, `base_metal_spec` VARCHAR(60), `base_metal_family` VARCHAR(16), `p_number` VARCHAR(8), `thickness_mm` REAL, `joint_type` VARCHAR(16), `position` VARCHAR(4), `preheat_c` REAL, `interpass_c` REAL, `machine` VARCHAR(80), `job_ref` VARCHAR(80), `outcome` VARCHAR(60), `outcome_kind` VARCHAR(12), `defects` TEXT, `notes` TEXT, `welded_on` DATE NOT NULL, `entered` TEXT NOT NULL DEFAULT '{}', `findings` TEXT NOT NULL DEFAULT '[]', `derived` TEXT NOT NULL DEFAULT '{}', `caution_count` INTEGER NOT NULL DEFAULT 0, `search_text` TEXT NOT NULL DEFAULT '', `frozen_at` DATETIME, `cited_by_procedure_id` INTEGER, `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL);
+
+CREATE VIRTUAL TABLE settings_records_fts USING fts5(
+		search_text, content='settings_records', content_rowid='id', tokenize='trigram');
+
+CREATE TABLE 'settings_records_fts_config'(k PRIMARY KEY, v) WITHOUT ROWID;
+
+CREATE TABLE 'settings_records_fts_data'(id INTEGER PRIMARY KEY, block BLOB);
+
+CREATE TABLE 'settings_records_fts_docsize'(id INTEGER PRIMARY KEY, sz BLOB);
+
+CREATE TABLE 'settings_records_fts_idx'(segid, term, pgno, PRIMARY KEY(segid, term)) WITHOUT ROWID;
 
 CREATE TABLE `shops` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `name` VARCHAR(120) NOT NULL, `unit_system` VARCHAR(10) NOT NULL DEFAULT 'imperial', `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL);
 
@@ -169,6 +183,42 @@ CREATE TRIGGER pqr_addenda_no_delete BEFORE DELETE ON pqr_addenda
 
 CREATE TRIGGER pqr_addenda_no_update BEFORE UPDATE ON pqr_addenda
 			BEGIN SELECT RAISE(ABORT, 'pqr_addenda are append-only'); END;
+
+CREATE TRIGGER settings_record_versions_delete AFTER DELETE ON settings_records
+		BEGIN
+			INSERT INTO settings_record_versions (shop_id, version) VALUES (old.shop_id, 1)
+			ON CONFLICT (shop_id) DO UPDATE SET version = version + 1;
+			
+		END;
+
+CREATE TRIGGER settings_record_versions_insert AFTER INSERT ON settings_records
+		BEGIN
+			INSERT INTO settings_record_versions (shop_id, version) VALUES (new.shop_id, 1)
+			ON CONFLICT (shop_id) DO UPDATE SET version = version + 1;
+			
+		END;
+
+CREATE TRIGGER settings_record_versions_update AFTER UPDATE ON settings_records
+		BEGIN
+			INSERT INTO settings_record_versions (shop_id, version) VALUES (new.shop_id, 1)
+			ON CONFLICT (shop_id) DO UPDATE SET version = version + 1;
+			UPDATE settings_record_versions SET version = version + 1 WHERE shop_id = old.shop_id AND old.shop_id <> new.shop_id;
+		END;
+
+CREATE TRIGGER settings_records_fts_ad AFTER DELETE ON settings_records BEGIN
+		INSERT INTO settings_records_fts(settings_records_fts, rowid, search_text)
+		VALUES ('delete', old.id, old.search_text);
+	END;
+
+CREATE TRIGGER settings_records_fts_ai AFTER INSERT ON settings_records BEGIN
+		INSERT INTO settings_records_fts(rowid, search_text) VALUES (new.id, new.search_text);
+	END;
+
+CREATE TRIGGER settings_records_fts_au AFTER UPDATE OF search_text ON settings_records BEGIN
+		INSERT INTO settings_records_fts(settings_records_fts, rowid, search_text)
+		VALUES ('delete', old.id, old.search_text);
+		INSERT INTO settings_records_fts(rowid, search_text) VALUES (new.id, new.search_text);
+	END;
 
 CREATE TRIGGER sign_offs_no_delete BEFORE DELETE ON sign_offs
 			BEGIN SELECT RAISE(ABORT, 'sign_offs are append-only'); END;

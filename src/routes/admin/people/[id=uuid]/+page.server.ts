@@ -1,6 +1,6 @@
 import { error } from '@sveltejs/kit';
 import { fail, message, superValidate } from 'sveltekit-superforms';
-import { zod4 } from 'sveltekit-superforms/adapters';
+import { zod4 } from '$lib/forms/zod4';
 import { requireRole } from '$lib/server/auth/guards';
 import { RefusedError } from '$lib/server/people/errors';
 import { refuseForm, rethrowAsHttp } from '$lib/server/people/form-errors';

@@ -1,6 +1,6 @@
 import { redirect } from '@sveltejs/kit';
 import { fail, superValidate } from 'sveltekit-superforms';
-import { zod4 } from 'sveltekit-superforms/adapters';
+import { zod4 } from '$lib/forms/zod4';
 import { requireRole } from '$lib/server/auth/guards';
 import { refuseForm, rethrowAsHttp } from '$lib/server/people/form-errors';
 import { MANAGE_ROLES } from '$lib/server/welders/access';

@@ -1,0 +1,130 @@
+// node --import tsx scripts/bench/profile.ts [--seconds 5 --records 10000 --out DIR]
+// Where a request's time goes: the built server runs under `node --cpu-prof` on a throw-away
+// seeded database, each hot route is loaded in turn, and the server's CPU profile is summed by
+// function (self time) and printed as a top list. The .cpuprofile files stay in the out folder
+// for Chrome DevTools or speedscope.
+import { spawn } from 'node:child_process';
+import { mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join, resolve } from 'node:path';
+import { stackEnv, startCatcher } from '../lib/local-stack';
+import { openSqlite } from '../lib/sqlite-file';
+import { freePort } from './ports';
+import { signInCookie, waitFor } from './http';
+import { load, type Route } from './load';
+import { benchPerson, prepareBench } from './prepare';
+import { addProcedures, addRecords } from './seed-bulk';
+import { topCosts } from './cpu-profile';
+
+const arg = (name: string, fallback: string) => {
+	const i = process.argv.indexOf(name);
+	return i >= 0 ? process.argv[i + 1]! : fallback;
+};
+const SECONDS = Number(arg('--seconds', '5'));
+const RECORDS = Number(arg('--records', '10000'));
+const outDir = resolve(arg('--out', 'bench-results/profile'));
+const buildDir = process.env.BUILD_DIR ?? 'build';
+
+const dataDir = mkdtempSync(join(tmpdir(), 'beadline-profile-'));
+const port = await freePort();
+stackEnv({ dataDir, port, smtpPort: await freePort() });
+Object.assign(process.env, {
+	BEADLINE_JOBS: 'off',
+	SIGNIN_LIMIT_IP_PER_MINUTE: '100000',
+	FORM_LIMIT_IP_PER_MINUTE: '100000',
+	BOOTH_LIMIT_IP_PER_MINUTE: '100000000'
+});
+const origin = `http://localhost:${port}`;
+const fx = await prepareBench();
+const db = await openSqlite(process.env.DATABASE_FILE!, { mustExist: true });
+const templates = await db.all('SELECT * FROM settings_records WHERE shop_id = ?', [fx.shopId]);
+const authors = await db.all<{ id: string }>(
+	"SELECT id FROM users WHERE shop_id = ? AND role IN ('engineer', 'admin')",
+	[fx.shopId]
+);
+const shop = { shopId: fx.shopId, authorIds: authors.map((a) => a.id) };
+await addRecords(db, shop, RECORDS, templates);
+await addProcedures(
+	db,
+	shop,
+	RECORDS,
+	{
+		procedure: (await db.get('SELECT * FROM procedures WHERE id = ?', [fx.template.procedureId]))!,
+		revision: (await db.get('SELECT * FROM procedure_revisions WHERE procedure_id = ?', [
+			fx.template.procedureId
+		]))!
+	},
+	'WPS'
+);
+const booth = await db.get<{ token: string }>(
+	'SELECT token FROM booth_links WHERE procedure_id = ? AND revoked_at IS NULL',
+	[fx.approved.procedureId]
+);
+await db.close();
+
+await startCatcher();
+rmSync(outDir, { recursive: true, force: true });
+mkdirSync(outDir, { recursive: true });
+const server = spawn(
+	process.execPath,
+	['--cpu-prof', '--cpu-prof-dir', outDir, `${buildDir}/index.js`],
+	{ env: process.env, stdio: ['ignore', 'ignore', 'inherit'] }
+);
+await waitFor(`${origin}/api/v1/health`);
+const cookie = await signInCookie(
+	origin,
+	benchPerson('engineer').email,
+	benchPerson('engineer').password
+);
+const welder = await signInCookie(
+	origin,
+	benchPerson('welder').email,
+	benchPerson('welder').password
+);
+const json = { 'content-type': 'application/json' };
+const body = JSON.stringify({ process: 'GTAW', amps: 125, thickness: { value: 3, unit: 'mm' } });
+const routes: Route[] = [
+	{ name: 'health', path: '/api/v1/health' },
+	{
+		name: 'checks (session)',
+		path: '/api/v1/checks',
+		method: 'POST' as const,
+		headers: { ...json, cookie, origin },
+		body
+	},
+	{
+		name: 'checks (token)',
+		path: '/api/v1/checks',
+		method: 'POST' as const,
+		headers: { ...json, authorization: `Bearer ${fx.token}` },
+		body
+	},
+	{ name: 'procedures', path: '/procedures', headers: { cookie } },
+	{
+		name: 'records filtered',
+		path: '/records?process=GTAW&family=carbon-steel',
+		headers: { cookie }
+	},
+	...(booth
+		? [{ name: 'booth (welder)', path: `/b/${booth.token}`, headers: { cookie: welder } }]
+		: [])
+];
+for (const r of routes) {
+	const res = await load(origin, r, { seconds: SECONDS, connections: 10 });
+	console.log(
+		`${r.name.padEnd(20)} ${String(res.reqPerSec).padStart(6)} req/s  p99 ${res.p99Ms} ms  non-2xx ${res.non2xx}`
+	);
+}
+const exited = new Promise((r) => server.once('exit', r));
+server.kill('SIGTERM');
+await exited;
+rmSync(dataDir, { recursive: true, force: true });
+
+const file = readdirSync(outDir).find((f) => f.endsWith('.cpuprofile'));
+if (!file) throw new Error(`No .cpuprofile in ${outDir}`);
+const profile = JSON.parse(readFileSync(join(outDir, file), 'utf8'));
+console.log(`\nTop self time over all routes (${join(outDir, file)}):`);
+for (const row of topCosts(profile, 25)) console.log(row);
+console.log('\nBy package (self time):');
+for (const row of topCosts(profile, 15, 'package')) console.log(row);
+process.exit(0);
