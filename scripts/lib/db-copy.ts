@@ -13,6 +13,11 @@ import { openSequelize, sequelize as target } from '../../src/lib/server/db/sequ
 import { copyUploads, type UploadsCopy } from './db-copy-uploads';
 
 const MIGRATIONS_TABLE = 'schema_migrations';
+/**
+ * Kept by the target's own triggers as the records are inserted (migration 0009: SQLite's FTS5
+ * index and its shadow tables, the per-shop version counters), so never copied or counted.
+ */
+const DERIVED = /^(settings_records_fts($|_)|settings_record_versions$)/;
 const BATCH = 500;
 
 export interface CopyReport {
@@ -187,7 +192,9 @@ export async function copyDatabase(opts: CopyOptions): Promise<CopyReport> {
 		const applied = await migrateDatabase(target);
 		log(applied.length ? `target migrated: ${applied.join(', ')}` : 'target schema up to date');
 
-		const tables = (await tableNames(source)).filter((t) => t !== MIGRATIONS_TABLE);
+		const tables = (await tableNames(source)).filter(
+			(t) => t !== MIGRATIONS_TABLE && !DERIVED.test(t)
+		);
 		const targetTables = new Set(await tableNames(target));
 		const missing = tables.filter((t) => !targetTables.has(t));
 		if (missing.length)
