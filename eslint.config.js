@@ -59,5 +59,13 @@ export default ts.config(
 			'import-x/resolver-next': [createNodeResolver({ extensions: ['.ts', '.js'] })]
 		},
 		rules: { 'import-x/no-cycle': ['error', { ignoreExternal: true }] }
+	},
+	{
+		// SvelteKit keeps the service worker out of the app's tsconfig (it runs with the webworker
+		// library, not the DOM): it has a tsconfig of its own.
+		files: ['src/service-worker.ts'],
+		languageOptions: {
+			parserOptions: { projectService: false, project: './tsconfig.worker.json' }
+		}
 	}
 );

@@ -44,6 +44,8 @@ const config = {
 				tsconfig.include.push('../reference/**/*.ts', '../scripts/**/*.ts', '../*.config.ts');
 			}
 		},
+		// Registered by the app shell for signed-in members only (src/lib/components/AppShell.svelte).
+		serviceWorker: { register: false },
 		alias: {
 			$reference: 'reference',
 			// One adapter by its own path (see src/lib/forms/zod4.ts).
@@ -58,6 +60,8 @@ const config = {
 				'img-src': ['self', 'data:', 'blob:'],
 				'font-src': ['self'],
 				'connect-src': ['self'],
+				'worker-src': ['self'],
+				'manifest-src': ['self'],
 				'media-src': ['self', 'blob:'],
 				'object-src': ['none'],
 				'base-uri': ['self'],

@@ -50,14 +50,15 @@ export const D1_1_CATEGORY_B: readonly PreheatRow[] = [
 ];
 
 /**
- * Table note (from memory): below 32 F (0 C) base metal temperature, preheat to at least 70 F
- * (20 C) and keep it during welding.
+ * Table note: below 32 F (0 C) base metal temperature, preheat to at least 70 F (20 C) and keep
+ * it during welding. Note a of D1.1:2015 Table 3.3 (Table 5.11 in D1.1:2025), as quoted by
+ * public pages (clause5 cold-weather page on D1.1:2025; AWS forum thread 173640).
  */
 export const D1_1_COLD_BASE_METAL = {
 	belowF: 32,
 	preheatF: 70,
 	preheatC: 20,
-	kind: 'from memory'
+	kind: 'published'
 } as const;
 
 /**

@@ -230,8 +230,9 @@ export const AWG_ALUMINIUM: Source = {
 
 export const BWG_TUBE: Source = {
 	label: 'Birmingham Wire Gauge (BWG) for tube wall',
-	edition: 'recalled tube-wall values',
-	kind: 'from memory'
+	edition:
+		"Holtzapffel's measured BWG table (Mechanical Manipulation, reprinted at chestofbooks.com) and the Engineering ToolBox BWG table; gauges 8-26 agree with both",
+	kind: 'published'
 };
 
 export const POLARITY_PRACTICE: Source = {
@@ -245,4 +246,101 @@ export const PROCEDURE_RANGES: Source = {
 	label: 'The procedure (WPS) ranges',
 	edition: 'the revision the record is checked against',
 	kind: 'published'
+};
+
+// ---- ISO and EN texts (issue 15). The ISO standards are copyright texts with no public copy at
+// hand: their rows are recalled and marked so, except where a public page quoted the clause.
+
+export const ISO_15614_1_RANGES: Source = {
+	label: 'ISO 15614-1 clause 8 (range of qualification)',
+	edition:
+		'ISO 15614-1:2017+A1:2019, rows recalled (same rows as the 2004 edition, Tables 5 and 6)',
+	kind: 'from memory',
+	note: 'Level 2 rows. Verify every range in the standard before relying on it.'
+};
+
+export const ISO_15614_1_LEVELS: Source = {
+	label: 'ISO 15614-1:2017 levels 1 and 2 (BS EN ISO 15614-1:2017 national foreword)',
+	edition: 'BS EN ISO 15614-1:2017, national foreword, read from a public copy',
+	kind: 'published',
+	note: 'Level 1 is based on ASME IX, level 2 on the 2004 edition; a level 2 test also qualifies level 1, not the reverse; with no level specified, level 2 applies.'
+};
+
+export const ISO_TR_15608: Source = {
+	label: 'ISO/TR 15608 material grouping system (steels)',
+	edition: 'ISO/TR 15608:2017, group names recalled',
+	kind: 'from memory'
+};
+
+export const ISO_9606_1_RANGES: Source = {
+	label: 'ISO 9606-1 clause 5 (range of qualification)',
+	edition: 'ISO 9606-1:2012 (Tables 2 to 12), rows recalled',
+	kind: 'from memory',
+	note: 'Verify every range in the standard before relying on it.'
+};
+
+export const ISO_9606_1_FILLET_SUPPLEMENT: Source = {
+	label: 'ISO 9606-1:2012 5.4: supplementary fillet test (10 mm, single layer, PB)',
+	edition: 'ISO 9606-1:2012, as quoted by a certification body (dekra.se, ISO 9606-1 page)',
+	kind: 'published'
+};
+
+export const ISO_9606_1_VALIDITY: Source = {
+	label: 'ISO 9606-1:2012 9.2 (six-month confirmation) and 9.3 a), b), c) (revalidation)',
+	edition:
+		'ISO 9606-1:2012, as quoted by certification bodies (thewdc.co.uk 2021, dekra.se, necitservices.com)',
+	kind: 'published',
+	note: '9.3 a) retest every 3 years; b) every 2 years, two production welds of the last 6 months tested volumetrically or destructively; c) valid while confirmed every 6 months, same manufacturer with ISO 3834-2 or -3 and documented acceptable welds. Route c) is not accepted for PED categories II-IV.'
+};
+
+export const ISO_6947: Source = {
+	label: 'ISO 6947 welding positions (PA to PH, PJ, H-L045, J-L045)',
+	edition:
+		'ISO 6947:2019 (and 2011), names recalled; the ASME/AWS equivalents are the usual correspondence, not a table of either code',
+	kind: 'from memory'
+};
+
+export const EN_1011_2_CET: Source = {
+	label: 'EN 1011-2 Annex C.3 (method B): CET and preheat Tp',
+	edition:
+		'EN 1011-2:2001 (ISO/TR 17671-2:2002); formula checked against a public reprint (indugrid.net, weld preheat calculator)',
+	kind: 'published',
+	note: 'CET = C + (Mn+Mo)/10 + (Cr+Cu)/20 + Ni/40; Tp = 697 CET + 160 tanh(d/35) + 62 HD^0.35 + (53 CET - 32) Q - 328 (degC, d mm, HD ml/100 g, Q kJ/mm).'
+};
+
+export const EN_1011_2_CET_LIMITS: Source = {
+	label: 'EN 1011-2 Annex C.3: validity ranges of the CET method',
+	edition: 'EN 1011-2:2001, recalled',
+	kind: 'from memory',
+	note: 'CET 0.2-0.5 %, d 10-90 mm, HD 1-20 ml/100 g, Q 0.5-4.0 kJ/mm, C 0.05-0.32 %.'
+};
+
+export const EN_1011_2_HYDROGEN_SCALES: Source = {
+	label: 'EN 1011-2 Annex C.2 hydrogen scales A to E',
+	edition: 'EN 1011-2:2001 Table C.2, as reprinted on a public preheat page (gowelding.com)',
+	kind: 'published',
+	note: 'A > 15; B 10-15; C 5-10; D 3-5; E <= 3 ml/100 g deposited metal.'
+};
+
+export const AWS_D1_1_QUALIFICATION: Source = {
+	label: 'AWS D1.1/D1.1M WPS qualification ranges (Tables 4.1 and 4.2 in 2015; Clause 6 in 2020)',
+	edition: 'D1.1/D1.1M:2015, rows recalled',
+	kind: 'from memory',
+	note: 'Verify in the edition the contract names.'
+};
+
+export const AWS_D1_1_GMAW_S: Source = {
+	label: 'AWS D1.1/D1.1M 3.2.2: GMAW-S is not prequalified; its WPS is qualified by test',
+	edition:
+		'D1.1:2000 3.2.2 and D1.1/D1.1M:2015 notes to Figures 3.2 and 3.3, read from public copies',
+	kind: 'published',
+	note: 'The Table 4.5 essential variable limits for GMAW also apply to GMAW-S.'
+};
+
+export const ASME_IX_QW_255_256: Source = {
+	label: 'ASME BPVC Section IX QW-255 (GMAW, FCAW) and QW-256 (GTAW) variable tables',
+	edition:
+		'BPVC IX 2004 with 2005 addenda and 2019, as reproduced in public WPS/PQR review checklists',
+	kind: 'published',
+	note: 'E = essential, S = supplementary essential (when toughness testing applies), N = nonessential.'
 };

@@ -1,12 +1,14 @@
 import type { Handle, HandleServerError, RequestEvent, ServerInit } from '@sveltejs/kit';
 import { sequence } from '@sveltejs/kit/hooks';
 import { currentMember } from '$lib/server/auth/current-member';
+import { MEMBER_HEADER, memberKey } from '$lib/server/auth/member-key';
 import { exitOnConfigError, migrate } from '$lib/server/db';
 import { publicError } from '$lib/server/public-error';
 import { sweepUploads } from '$lib/server/maintenance/upload-sweep';
 import { orExit } from '$lib/server/config-error';
 import { checkStorage } from '$lib/server/storage/select';
 import { startJobTimers } from '$lib/server/jobs/timer';
+import { closeOnShutdown } from '$lib/server/shutdown';
 import { building } from '$app/environment';
 
 export const init: ServerInit = async () => {
@@ -18,6 +20,7 @@ export const init: ServerInit = async () => {
 	if (!building) await sweepUploads(new Date(Date.now() - process.uptime() * 1000));
 	// The hourly lapse-notice run; never while building (BEADLINE_JOBS=off leaves it to cron).
 	if (!building) startJobTimers();
+	if (!building) closeOnShutdown();
 };
 
 const securityHeaders: Handle = async ({ event, resolve }) => {
@@ -67,6 +70,8 @@ const member: Handle = async ({ event, resolve }) => {
 	if (event.locals.user && !response.headers.has('Cache-Control')) {
 		response.headers.set('Cache-Control', 'private, no-store');
 	}
+	// Tells the service worker whose pages it may keep on this phone (none when signed out).
+	if (event.locals.user) response.headers.set(MEMBER_HEADER, memberKey(event.locals.user.id));
 	return response;
 };
 

@@ -57,6 +57,7 @@ export const ACCESS_RULES: Record<string, Access> = {
 	'GET /b/[token]': pub(), // status and number for anyone who scans; values for members
 	'GET /booth': members,
 	'GET /help/checks': pub(),
+	'GET /offline': pub(), // the service worker's "not on this phone" page: names nobody
 	'GET /invite/[token]': pub([404, 410]), // no live invite token can be read back (hashed)
 	'GET /pqrs': roles(VIEW),
 	'GET /pqrs/[id=id]': roles(VIEW),
@@ -114,6 +115,7 @@ export const ACCESS_RULES: Record<string, Access> = {
 	'POST /api/v1/checks': members,
 	'POST /api/v1/checks/pqr-ranges': members,
 	'POST /api/v1/checks/welder-positions': members,
+	'POST /api/v1/booth/[token]/taps': members, // a queued continuity tap; another shop's: refused
 	'POST /api/v1/pqrs': roles(AUTHOR),
 	'POST /api/v1/pqrs/[id=id]/addenda': roles(AUTHOR),
 	'POST /api/v1/pqrs/[id=id]/certify': roles(CERTIFY),

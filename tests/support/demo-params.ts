@@ -66,7 +66,7 @@ const BY_AREA: [RegExp, (db: SqliteFile, shop: number) => Promise<Params | undef
 			)
 	],
 	[
-		/^\/b\b/,
+		/^\/(api\/v1\/booth|b)\b/,
 		(db, shop) =>
 			db.get(
 				'SELECT token FROM booth_links WHERE shop_id = ? AND revoked_at IS NULL ORDER BY id DESC LIMIT 1',

@@ -43,6 +43,21 @@ async function healthy(origin: string, timeoutMs: number): Promise<void> {
 }
 
 /**
+ * Migrates and seeds the stores `env` names, in a child. Not spawnSync: a bucket the seed writes
+ * to (s3rver) may be answering from this very process, which must keep its event loop turning.
+ */
+export async function prepareData(env: NodeJS.ProcessEnv, label: string): Promise<void> {
+	const prep = spawn(process.execPath, ['--import', 'tsx', 'tests/support/prepare-data.ts'], {
+		env,
+		stdio: ['ignore', 'ignore', 'pipe']
+	});
+	let prepErr = '';
+	prep.stderr.on('data', (d: Buffer) => (prepErr += d.toString()));
+	const status = await new Promise<number | null>((r) => prep.once('exit', r));
+	if (status !== 0) throw new Error(`Preparing ${label} failed: ${prepErr}`);
+}
+
+/**
  * Migrates and seeds a fresh data folder; `start()` then runs the built app on it. `env` adds
  * or overrides variables (e.g. a bucket's STORAGE=s3 and S3_* from scripts/lib/s3-fake.ts).
  */
@@ -69,15 +84,7 @@ export async function ownServer(
 		BOOTH_LIMIT_IP_PER_MINUTE: '100000',
 		...opts.env
 	};
-	// Not spawnSync: a bucket the seed writes to (s3rver) may be answering from this process.
-	const prep = spawn(process.execPath, ['--import', 'tsx', 'tests/support/prepare-data.ts'], {
-		env,
-		stdio: ['ignore', 'ignore', 'pipe']
-	});
-	let prepErr = '';
-	prep.stderr.on('data', (d: Buffer) => (prepErr += d.toString()));
-	const status = await new Promise<number | null>((r) => prep.once('exit', r));
-	if (status !== 0) throw new Error(`Preparing ${dataDir} failed: ${prepErr}`);
+	await prepareData(env, dataDir);
 	const catcher: SMTPServer = await startMailCatcher({
 		port: smtpPort,
 		dir: env.MAIL_CATCHER_DIR!

@@ -5,26 +5,32 @@ import { sourceOf, type FindingSource } from '$lib/weld';
 import * as S from '$reference/sources';
 import type { Source } from '$reference/types';
 
-// Recalled, so marked so.
+// The paragraphs as printed in the QW-250 variable tables, read from public checklists that
+// reproduce them (see reference/sources.ts ASME_IX_QW_255_256), and QW-401 from a public copy
+// of Article IV.
 export const QW_424: Source = {
-	label: 'ASME IX QW-424 (base metals qualified by P-Number)',
-	edition: 'BPVC IX, recalled',
-	kind: 'from memory'
+	label: 'ASME IX QW-403.11 / QW-424 (base metals qualified by P-Number)',
+	edition:
+		'BPVC IX 2004 with 2005 addenda and 2019: QW-403.11 "change in P-No. qualified" is essential for SMAW, SAW, GMAW, FCAW and GTAW (public WPS/PQR checklists)',
+	kind: 'published'
 };
 export const QW_404_4: Source = {
 	label: 'ASME IX QW-404.4 (F-Number is an essential variable)',
-	edition: 'BPVC IX, recalled',
-	kind: 'from memory'
+	edition:
+		'BPVC IX 2004 with 2005 addenda and 2019 (public WPS/PQR checklists of QW-253 to QW-256)',
+	kind: 'published'
 };
 export const QW_401: Source = {
 	label: 'ASME IX QW-401 / AWS D1.1 Table 4.5 (process change needs a new PQR)',
-	edition: 'recalled',
-	kind: 'from memory'
+	edition:
+		'BPVC IX Article IV QW-401: "A change from one welding process to another welding process is an essential variable" (public copy of the 1998 edition, 1999 addenda)',
+	kind: 'published'
 };
 export const QW_409_4: Source = {
 	label: 'ASME IX QW-409.4 (current type and polarity)',
-	edition: 'BPVC IX, recalled',
-	kind: 'from memory'
+	edition:
+		'BPVC IX 2004 with 2005 addenda and 2019: supplementary essential with toughness testing, nonessential otherwise (public WPS/PQR checklists)',
+	kind: 'published'
 };
 export const PRODUCT: Source = {
 	label: 'Beadline: a procedure under a code is supported by a PQR',
@@ -33,7 +39,15 @@ export const PRODUCT: Source = {
 };
 
 /** For the help page's list of sources. */
-export const PROCEDURE_SOURCES: readonly Source[] = [QW_424, QW_404_4, QW_401, QW_409_4, PRODUCT];
+export const PROCEDURE_SOURCES: readonly Source[] = [
+	QW_424,
+	QW_404_4,
+	QW_401,
+	QW_409_4,
+	S.ASME_IX_QW_255_256,
+	S.ISO_15614_1_RANGES,
+	PRODUCT
+];
 
 export const PROCEDURE_ONLY_CHECK_IDS = [
 	'pqr-support',
@@ -41,7 +55,8 @@ export const PROCEDURE_ONLY_CHECK_IDS = [
 	'pqr-current-type',
 	'pqr-p-number',
 	'pqr-f-number',
-	'pqr-positions'
+	'pqr-positions',
+	'pqr-code-rules'
 ] as const;
 
 export type ProcedureOnlyCheckId = (typeof PROCEDURE_ONLY_CHECK_IDS)[number];
@@ -103,5 +118,11 @@ export const PROCEDURE_CHECK_CATALOGUE: readonly ProcedureCatalogueEntry[] = [
 		'Positions the PQRs cover',
 		'Every production position against the test positions of the PQRs, by the position rules of QW-461.9 applied as the shop’s rule.',
 		[S.ASME_IX_QW_461_9]
+	),
+	e(
+		'pqr-code-rules',
+		'Changes from the PQR, by the procedure’s own code',
+		'ASME IX procedures: each change from the PQR classed by QW-255 (GMAW, FCAW) or QW-256 (GTAW) as essential, supplementary essential or nonessential. ISO 15614-1 procedures: transfer mode by 8.4.1, and a plain note where the standard has no range for the variable. D1.1 procedures keep the Table 4.5 triggers.',
+		[S.ASME_IX_QW_255_256, S.ISO_15614_1_RANGES, S.AWS_D1_1_TABLE_4_5]
 	)
 ];

@@ -56,7 +56,7 @@ describe('pqr-support', () => {
 
 describe('pqr-process', () => {
 	it('marks a PQR of another process outside, and compares nothing else against it', () => {
-		// from memory: ASME IX QW-401 / AWS D1.1 Table 4.5, a process change needs a new PQR
+		// ASME IX QW-401 (Article IV, public copy): a process change is essential, needs a new PQR
 		const v = revision((x) => {
 			x.baseMetals.pNumbers = ['8'];
 			x.electrical.currentType = 'AC';
@@ -82,7 +82,7 @@ describe('pqr-process', () => {
 
 describe('pqr-current-type', () => {
 	it('marks a current the PQRs were not welded with outside', () => {
-		// from memory: ASME IX QW-409.4, current type and polarity
+		// ASME IX QW-409.4, current type and polarity (QW-255/256, public checklists)
 		const v = revision((x) => (x.electrical.currentType = 'AC'));
 		const found = of(v, [pqr('PQR-1', { currentType: 'DCEN' })], 'pqr-current-type');
 		expect(found).toHaveLength(1);
@@ -90,7 +90,7 @@ describe('pqr-current-type', () => {
 	});
 
 	it('is ok when one of the PQRs was welded with it', () => {
-		// from memory: ASME IX QW-409.4
+		// ASME IX QW-409.4 (QW-255/256, public checklists)
 		const v = revision((x) => (x.electrical.currentType = 'AC'));
 		const pqrs = [pqr('PQR-1', { currentType: 'DCEN' }), pqr('PQR-2', { currentType: 'AC' })];
 		expect(of(v, pqrs, 'pqr-current-type')).toMatchObject([{ status: 'ok' }]);
@@ -103,7 +103,7 @@ describe('pqr-current-type', () => {
 
 describe('pqr-p-number', () => {
 	it('marks a listed P-Number no PQR qualifies outside', () => {
-		// from memory: ASME IX QW-424, base metals qualified by P-Number
+		// ASME IX QW-403.11 / QW-424, base metals qualified by P-Number (public checklists)
 		const v = revision((x) => (x.baseMetals.pNumbers = ['1', '8']));
 		const found = of(v, [pqr('PQR-1', { pNumbers: ['1'] })], 'pqr-p-number');
 		expect(found).toHaveLength(1);
@@ -112,7 +112,7 @@ describe('pqr-p-number', () => {
 	});
 
 	it('is ok when the PQRs between them qualify every one listed', () => {
-		// from memory: ASME IX QW-424
+		// ASME IX QW-403.11 / QW-424 (public checklists)
 		const v = revision((x) => (x.baseMetals.pNumbers = ['1', '8']));
 		const pqrs = [pqr('PQR-1', { pNumbers: ['1'] }), pqr('PQR-2', { pNumbers: ['8'] })];
 		expect(of(v, pqrs, 'pqr-p-number')).toMatchObject([
@@ -127,7 +127,7 @@ describe('pqr-p-number', () => {
 
 describe('pqr-f-number', () => {
 	it('marks a listed F-Number no PQR was welded with outside', () => {
-		// from memory: ASME IX QW-404.4, F-Number is an essential variable
+		// ASME IX QW-404.4, F-Number is an essential variable (QW-253 to QW-256, public checklists)
 		const v = revision((x) => (x.fillerMetals.fNumbers = [6, 4]));
 		const found = of(v, [pqr('PQR-1', { fNumbers: [6] })], 'pqr-f-number');
 		expect(found).toHaveLength(1);
@@ -136,7 +136,7 @@ describe('pqr-f-number', () => {
 	});
 
 	it('is ok when every F-Number listed is qualified', () => {
-		// from memory: ASME IX QW-404.4
+		// ASME IX QW-404.4 (public checklists)
 		const v = revision((x) => (x.fillerMetals.fNumbers = [6]));
 		expect(of(v, [pqr('PQR-1', { fNumbers: [6] })], 'pqr-f-number')).toMatchObject([
 			{ status: 'ok', value: 'F-6' }

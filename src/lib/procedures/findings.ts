@@ -24,7 +24,8 @@ import {
 	QW_409_4,
 	QW_424
 } from './check-catalogue';
-import { lengthMm, type PqrQualified } from './pqr-values';
+import { codeChangeFindings, codeThicknessFindings, type PqrWithCoupon } from './code-findings';
+import { lengthMm } from './pqr-values';
 
 export type ProcedureCheckId = CheckId | ProcedureOnlyCheckId;
 
@@ -135,10 +136,8 @@ function weldCoreFindings(v: RevisionVariables, system: UnitSystem): ProcedureFi
 	return out;
 }
 
-export interface PqrForFindings {
-	number: string;
-	qualified: PqrQualified;
-}
+/** A cited PQR: what it qualifies and, where read, its coupon (for the D1.1 and ISO rows). */
+export type PqrForFindings = PqrWithCoupon;
 
 /** Production positions to the letters F, H, V, O of groove and fillet work. */
 export function positionLetters(
@@ -200,8 +199,13 @@ function pqrFindings(
 		);
 	if (same.length === 0) return out;
 
-	// Thickness: the hull of what the PQRs qualify.
-	const t = same.flatMap((p) => (p.qualified.thickness ? [p.qualified.thickness] : []));
+	// Thickness by the revision's own code: D1.1 and ISO from the coupon; ASME IX (and shop
+	// practice, which has no code) by QW-451.1, the hull of what the PQRs qualify.
+	const byCode = v.code === 'aws-d1.1' || v.code === 'iso-15609-1';
+	if (byCode) out.push(...codeThicknessFindings(v, same, system));
+	const t = byCode
+		? []
+		: same.flatMap((p) => (p.qualified.thickness ? [p.qualified.thickness] : []));
 	const tr = v.baseMetals.thicknessMm;
 	if (t.length && (tr.min !== null || tr.max !== null)) {
 		const qMin = Math.min(...t.map((x) => lengthMm(x.min)));
@@ -316,7 +320,12 @@ function pqrFindings(
 			String
 		);
 
-	// AWS D1.1 requalification triggers, each PQR on its own.
+	// Changes from each PQR by the revision's own code: ASME IX QW-255/256 or ISO 15614-1 8.4.
+	if (v.code === 'asme-ix' || v.code === 'iso-15609-1') {
+		for (const p of same) out.push(...codeChangeFindings(v, p));
+		return out;
+	}
+	// AWS D1.1 requalification triggers, each PQR on its own (shop practice: for comparison).
 	for (const p of same) {
 		const q = p.qualified;
 		const found = requalificationTriggers(

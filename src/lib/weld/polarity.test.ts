@@ -34,7 +34,7 @@ describe('current type and polarity (common practice unless the classification s
 	it('FCAW and SMAW follow the classification', () => {
 		expect(status('FCAW', 'DCEP', 'carbon-steel', 'E71T-1C')).toBe('ok'); // common practice
 		expect(status('FCAW', 'DCEP', 'carbon-steel', 'E71T-11')).toBe('outside'); // self-shielded -11 is DCEN
-		expect(status('SMAW', 'AC', 'carbon-steel', 'E6010')).toBe('outside'); // E6010 is DCEP only (from memory)
+		expect(status('SMAW', 'AC', 'carbon-steel', 'E6010')).toBe('outside'); // E6010 is DCEP only (AWS A5.1 EXX10 = DC+, as reprinted at tokoc.com and in an equipment manual's electrode chart)
 		expect(status('SMAW', 'AC', 'carbon-steel', 'E7018')).toBe('ok'); // common practice
 		expect(status('SMAW', 'AC')).toBeUndefined(); // no classification: left out
 	});

@@ -92,7 +92,7 @@ describe('AWS D1.1:2015 Table 3.3 category B', () => {
 		expect(checkPreheat(ctx(2, 150))?.status).toBe('ok');
 		expect(checkPreheat(ctx(3, 200))?.status).toBe('outside');
 	});
-	it('cold base metal below 32 F is flagged (table note, from memory)', () => {
+	it('cold base metal below 32 F is flagged (D1.1:2015 Table 3.3 note a, as quoted publicly)', () => {
 		const f = checkPreheat(ctx(0.25, 20));
 		expect(f?.status).toBe('outside');
 		expect(f?.message).toContain('70 °F');

@@ -145,7 +145,7 @@ describe('gauges', () => {
 		expect(g10.ok && g10.mm / 25.4).toBeCloseTo(0.1019, 4);
 	});
 	it('tube wall uses BWG', () => {
-		const g = gaugeToMm(16, 'tube'); // from memory: 16 BWG = 0.065 in
+		const g = gaugeToMm(16, 'tube'); // 16 BWG = 0.065 in (Holtzapffel's BWG table; Engineering ToolBox)
 		expect(g.ok && g.mm / 25.4).toBeCloseTo(0.065, 6);
 	});
 	it('refuses stainless sheet gauge and gauges off the table', () => {

@@ -47,17 +47,17 @@ export const actions: Actions = {
 		if (!form.valid) return fail(400, { form });
 		form.data.password = '';
 		const TOO_MANY = 'Too many attempts. Wait 15 minutes and try again.';
-		if ((await signInLimiter.isLimited(event)) || isLockedOut(form.data.email)) {
+		if ((await signInLimiter.isLimited(event)) || (await isLockedOut(form.data.email))) {
 			return message(form, TOO_MANY, { status: 429 });
 		}
 		const user = await User.findOne({ where: { email: form.data.email } });
 		const password = String(data.get('password') ?? '');
 		const ok = await verifyPassword(password, user?.active ? user.passwordHash : null);
 		if (!user || !ok) {
-			recordFailure(form.data.email);
-			return message(form, isLockedOut(form.data.email) ? TOO_MANY : GENERIC, { status: 400 });
+			const locked = await recordFailure(form.data.email);
+			return message(form, locked ? TOO_MANY : GENERIC, { status: 400 });
 		}
-		clearFailures(form.data.email);
+		await clearFailures(form.data.email);
 		// Auth.js sets the session cookie and throws the redirect to where the member was going.
 		data.set('providerId', 'credentials');
 		data.set(

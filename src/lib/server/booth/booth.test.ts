@@ -114,22 +114,45 @@ describe('booth links', () => {
 });
 
 describe('lookups', () => {
+	const event = (ip = '10.0.0.7') =>
+		({
+			locals: { user: null },
+			request: new Request('http://booth.test/b/x', { headers: { 'user-agent': 'phone' } }),
+			getClientAddress: () => ip
+		}) as unknown as Parameters<typeof booth.logLookup>[0];
+
 	it('are logged in batches with the address, and counted per link', async () => {
 		const id = await approved();
 		const link = (await BoothLink.findOne({ where: { procedureId: id } }))!;
-		const event = {
-			locals: { user: null },
-			request: new Request('http://booth.test/b/x', { headers: { 'user-agent': 'phone' } }),
-			getClientAddress: () => '10.0.0.7'
-		} as unknown as Parameters<typeof booth.logLookup>[0];
-		booth.logLookup(event, { shopId: a.shopId, linkId: link.id, outcome: 'ok' });
-		booth.logLookup(event, { shopId: a.shopId, linkId: link.id, outcome: 'ok' });
-		booth.logLookup(event, { shopId: null, linkId: null, outcome: 'unknown' });
+		booth.logLookup(event(), { shopId: a.shopId, linkId: link.id, outcome: 'ok' });
+		booth.logLookup(event(), { shopId: a.shopId, linkId: link.id, outcome: 'ok' });
+		booth.logLookup(event(), { shopId: null, linkId: null, outcome: 'unknown' });
 		const counts = await booth.lookupCounts(a.shopId, [link.id]);
 		expect(counts.get(link.id)?.count).toBe(2);
 		const row = await BoothLookup.findOne({ where: { linkId: link.id } });
-		expect(row).toMatchObject({ ip: '10.0.0.7', userAgent: 'phone', outcome: 'ok' });
+		expect(row).toMatchObject({ ip: '10.0.0.7', userAgent: 'phone', outcome: 'ok', hits: 2 });
 		expect(await BoothLookup.count({ where: { outcome: 'unknown' } })).toBe(1);
+	});
+
+	it('log a burst once per link and window, however many batches race to write it', async () => {
+		const id = await approved();
+		const link = (await BoothLink.findOne({ where: { procedureId: id } }))!;
+		const tap = () =>
+			booth.logLookup(event(), { shopId: a.shopId, linkId: link.id, outcome: 'ok' });
+		// Five batches of ten flushed at once stand for five processes serving one burst.
+		const flushes: Promise<void>[] = [];
+		for (let b = 0; b < 5; b++) {
+			for (let i = 0; i < 10; i++) tap();
+			flushes.push(booth.flushLookups());
+		}
+		await Promise.all(flushes);
+		const rows = await BoothLookup.findAll({ where: { linkId: link.id } });
+		// A burst that crossed a window boundary while it ran would make two rows.
+		const windows = new Set(rows.map((r) => r.windowStart)).size;
+		expect(rows).toHaveLength(windows);
+		expect(rows.reduce((n, r) => n + r.hits, 0)).toBe(50);
+		expect((await booth.lookupCounts(a.shopId, [link.id])).get(link.id)?.count).toBe(50);
+		expect(rows[0]!.windowStart! % booth.LOOKUP_WINDOW_MS).toBe(0);
 	});
 });
 

@@ -8,9 +8,10 @@ export {
 	newBoothToken,
 	revokeBoothLink
 } from './links';
-export { boothLimiter, flushLookups, logLookup, lookupCounts } from './lookups';
+export { boothLimiter, flushLookups, logLookup, LOOKUP_WINDOW_MS, lookupCounts } from './lookups';
 export { resolveBoothToken, type BoothStatus } from './resolve';
 export { currentSheets, defaultPaper, PAPERS, sheetFor, type Paper } from './sheet-data';
 export { NO_WELDER, tapContinuity } from './tap';
+export { MAX_TAP_AGE_DAYS, receiveTap, type TapAnswer } from './queued-tap';
 export { memberView, type BoothMemberView } from './view';
 export { linksOfProcedure, currentBoothLinks } from './overview';

@@ -7,15 +7,18 @@ import { ProcedureRevision } from '../models';
 import { NotFoundError, RefusedError } from '../people/errors';
 import { readVariables } from '../procedures/find';
 import { recordContinuity, type RecordedUse } from '../welders/continuity';
+import { localDay } from '../welders/dates';
 import type { BoothStatus } from './resolve';
 
 export const NO_WELDER =
 	'Your account is not linked to a welder record, so there is nothing to log. Ask an engineer or admin to link it on the welder’s page.';
 
+/** `queued`: a tap the phone kept while offline, with the id it made and when it was made. */
 export async function tapContinuity(
 	user: SessionUser,
 	status: BoothStatus,
-	event: RequestEvent | null
+	event: RequestEvent | null,
+	queued?: { clientId: string; madeAt: Date }
 ): Promise<RecordedUse> {
 	if (status.link.revoked) throw new RefusedError('This link has been withdrawn.');
 	if (status.state !== 'approved')
@@ -34,7 +37,11 @@ export async function tapContinuity(
 			process: variables.process,
 			source: 'booth',
 			actor: { id: user.id, name: user.name },
-			event
+			event,
+			...(queued && {
+				date: localDay(queued.madeAt),
+				tap: { ...queued, linkId: status.link.id }
+			})
 		});
 	} catch (e) {
 		if (e instanceof NotFoundError) throw new RefusedError(NO_WELDER);

@@ -26,21 +26,34 @@ export const MAX_ATTEMPTS = 12;
  * and over. `work` may therefore run more than once: it must do nothing outside the database
  * (mail, files, timers): do those after write() resolves.
  */
-export function write<T>(work: (t: Transaction) => Promise<T>): Promise<T> {
-	if (isPostgres(sequelize)) return retrying(work);
+export function write<T>(
+	work: (t: Transaction) => Promise<T>,
+	opts: WriteOptions = {}
+): Promise<T> {
+	if (isPostgres(sequelize)) return retrying(work, opts);
 	const run = () => sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, (t) => work(t));
 	const result = tail.then(run, run);
 	tail = result.catch(() => undefined);
 	return result;
 }
 
-async function retrying<T>(work: (t: Transaction) => Promise<T>): Promise<T> {
+export interface WriteOptions {
+	/**
+	 * `work` is only statements that are each right on their own under concurrency: conditional
+	 * updates, `col = col + n`, inserts that ignore a duplicate (the shared counters, booth
+	 * look-ups and job leases). PostgreSQL then runs it READ COMMITTED, where contenders for one
+	 * row wait for its lock and go on, instead of SERIALIZABLE, where 40 racing increments of one
+	 * counter would abort each other until the retries ran out. No effect on SQLite.
+	 */
+	atomicStatements?: boolean;
+}
+
+async function retrying<T>(work: (t: Transaction) => Promise<T>, opts: WriteOptions): Promise<T> {
+	const L = Transaction.ISOLATION_LEVELS;
+	const isolationLevel = opts.atomicStatements ? L.READ_COMMITTED : L.SERIALIZABLE;
 	for (let attempt = 1; ; attempt++) {
 		try {
-			return await sequelize.transaction(
-				{ isolationLevel: Transaction.ISOLATION_LEVELS.SERIALIZABLE },
-				(t) => work(t)
-			);
+			return await sequelize.transaction({ isolationLevel }, (t) => work(t));
 		} catch (e) {
 			if (!isRetryableConflict(e) || attempt >= MAX_ATTEMPTS) throw e;
 			// Back off with jitter so the same contenders do not collide again in step.

@@ -1,7 +1,10 @@
 // The daily lapse warning: 30 and 7 days before a qualification lapses, and on the day, to the
 // shop's admins and the welder (if they have an address). A pure function of `now` and the
 // database, so tests pass a date. Each notice is claimed in the database before it is sent:
-// a second run or a restart never sends it twice.
+// a second run, a restart or another process never sends it twice. A claim whose mail was never
+// marked sent is released after STALE_CLAIM_MS (the process died between claim and send): that
+// notice goes out again, possibly twice if the mail had left before the crash, which beats a
+// lapse warning that never comes.
 import { Op } from 'sequelize';
 import { config } from '../config';
 import { write } from '../db';
@@ -29,6 +32,21 @@ export interface ReminderRun {
 	failed: { qualificationId: number; kind: LapseNoticeKind; error: string }[];
 }
 
+/** Longer than any run under its lease (jobs/timer.ts LEASE_MS), so no live run loses its claims. */
+export const STALE_CLAIM_MS = 15 * 60_000;
+
+/** Releases claims left unsent by a process that stopped between claiming and sending. */
+async function releaseStaleClaims(): Promise<number> {
+	// The real clock, not the run's `now` (tests run as of another day).
+	const before = new Date(Date.now() - STALE_CLAIM_MS);
+	return write((t) =>
+		LapseNotice.destroy({
+			where: { sentAt: null, updatedAt: { [Op.lt]: before } },
+			transaction: t
+		})
+	);
+}
+
 /** True when this run took the notice; false when an earlier run (or process) already had. */
 async function claim(
 	shopId: number,
@@ -52,6 +70,7 @@ export async function runLapseReminders(
 ): Promise<ReminderRun> {
 	const today = localDay(now);
 	const run: ReminderRun = { today, checked: 0, sent: [], failed: [] };
+	await releaseStaleClaims();
 	const origin = new URL(config.origin).origin;
 	for (const shop of await Shop.findAll({ order: [['id', 'ASC']] })) {
 		const admins = await User.findAll({

@@ -50,7 +50,12 @@ BoothLink.init(
 
 export type LookupOutcome = 'ok' | 'revoked' | 'unknown' | 'limited' | 'continuity';
 
-/** One lookup of a booth link: who (if signed in), from where, and what they were shown. */
+/**
+ * The lookups of a booth link (or, for unknown and limited ones, of an address) with one outcome
+ * in one window: who looked first (if signed in), from where, what they were shown, how many
+ * lookups the window had and when the last one was. Rows from before the windows (migration
+ * 0008) have no bucket and count one lookup each.
+ */
 export class BoothLookup extends Model<
 	InferAttributes<BoothLookup>,
 	InferCreationAttributes<BoothLookup>
@@ -63,6 +68,10 @@ export class BoothLookup extends Model<
 	declare ip: string | null;
 	declare userAgent: string | null;
 	declare at: Date;
+	declare bucket: CreationOptional<string | null>;
+	declare windowStart: CreationOptional<number | null>;
+	declare hits: CreationOptional<number>;
+	declare lastAt: CreationOptional<Date | null>;
 }
 
 BoothLookup.init(
@@ -74,7 +83,18 @@ BoothLookup.init(
 		userId: { type: DataTypes.UUID, allowNull: true },
 		ip: { type: DataTypes.STRING(64), allowNull: true },
 		userAgent: { type: DataTypes.STRING(300), allowNull: true },
-		at: { type: DataTypes.DATE, allowNull: false }
+		at: { type: DataTypes.DATE, allowNull: false },
+		bucket: { type: DataTypes.STRING(120), allowNull: true },
+		windowStart: {
+			type: DataTypes.BIGINT,
+			allowNull: true,
+			get(this: BoothLookup) {
+				const v = this.getDataValue('windowStart');
+				return v == null ? null : Number(v); // pg answers BIGINT as a string
+			}
+		},
+		hits: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
+		lastAt: { type: DataTypes.DATE, allowNull: true }
 	},
 	{ sequelize, tableName: 'booth_lookups', timestamps: false }
 );

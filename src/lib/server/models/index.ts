@@ -8,6 +8,7 @@ import { ProcedureRevision, RevisionPqr, RevisionRecord } from './procedure-revi
 import { Pqr, PqrAddendum, PqrReport } from './pqr';
 import { SettingsPhoto } from './settings-photo';
 import { SettingsRecord } from './settings-record';
+import { JobLease, WindowCounter } from './shared-state';
 import { Shop } from './shop';
 import { SignOff } from './sign-off';
 import { User } from './user';
@@ -48,6 +49,7 @@ export {
 	BoothLink,
 	BoothLookup,
 	Invite,
+	JobLease,
 	Pqr,
 	PqrAddendum,
 	PqrReport,
@@ -62,7 +64,8 @@ export {
 	Shop,
 	SignOff,
 	User,
-	VerificationToken
+	VerificationToken,
+	WindowCounter
 };
 
 export {
@@ -73,3 +76,5 @@ export {
 	VerificationLink,
 	Welder
 } from './welders';
+
+export { ContinuityTap } from './continuity-tap';

@@ -20,6 +20,8 @@ export class Pqr extends Model<InferAttributes<Pqr>, InferCreationAttributes<Pqr
 	declare number: string;
 	declare title: string;
 	declare process: string;
+	/** Governing code of the qualification (migration 0011): asme-ix, aws-d1.1, iso-15614-1. */
+	declare code: CreationOptional<string>;
 	declare state: PqrState;
 	declare actualValues: string;
 	declare tests: string;
@@ -43,6 +45,7 @@ Pqr.init(
 		number: { type: DataTypes.STRING(40), allowNull: false },
 		title: { type: DataTypes.STRING(120), allowNull: false },
 		process: { type: DataTypes.STRING(8), allowNull: false },
+		code: { type: DataTypes.STRING(16), allowNull: false, defaultValue: 'asme-ix' },
 		state: { type: DataTypes.STRING(12), allowNull: false },
 		actualValues: { type: DataTypes.TEXT, allowNull: false },
 		tests: { type: DataTypes.TEXT, allowNull: false },

@@ -13,6 +13,8 @@ export class Shop extends Model<InferAttributes<Shop>, InferCreationAttributes<S
 	declare id: CreationOptional<number>;
 	declare name: string;
 	declare unitSystem: CreationOptional<UnitSystem>;
+	/** Governing code new procedures, PQRs and WPQs start from (migration 0011). */
+	declare defaultCode: CreationOptional<string>;
 	declare createdAt: CreationOptional<Date>;
 	declare updatedAt: CreationOptional<Date>;
 }
@@ -22,6 +24,7 @@ Shop.init(
 		id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
 		name: { type: DataTypes.STRING(120), allowNull: false },
 		unitSystem: { type: DataTypes.STRING(10), allowNull: false, defaultValue: 'imperial' },
+		defaultCode: { type: DataTypes.STRING(16), allowNull: false, defaultValue: 'asme-ix' },
 		createdAt: DataTypes.DATE,
 		updatedAt: DataTypes.DATE
 	},

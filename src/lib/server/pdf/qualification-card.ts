@@ -92,9 +92,15 @@ export function rangeLines(q: QualificationView, units: UnitSystem): string[] {
 			: r.minDiameterIsSizeWelded
 				? `; pipe: the size welded (${formatLength(r.minDiameterMm, units)} OD)`
 				: `; pipe from ${formatLength(r.minDiameterMm, units)} OD`;
-	return [
+	const asme = [
 		`Groove ${list(r.groove)} (pipe ≤ 24 in: ${list(r.groovePipe)}); fillet ${list(r.fillet)} — QW-461.9`,
 		`Deposit ${dep} — QW-452.1(b)${od}${r.fNumber != null ? `; F-${r.fNumber}` : ''}`
+	];
+	if (!r.iso) return asme;
+	// An ISO 9606-1 qualification speaks ISO terms first; the ASME rows follow for comparison.
+	return [
+		`ISO 9606-1: ${r.iso.map((i) => `${i.variable.toLowerCase()} ${i.qualified} (${i.clause})`).join('; ')}`,
+		...asme.map((l) => `ASME IX, for comparison: ${l}`)
 	];
 }
 

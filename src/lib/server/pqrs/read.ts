@@ -1,3 +1,4 @@
+import { isoResultSet, type IsoResultSet } from '$lib/procedures/pqr-iso';
 // PQRs as their pages and the API show them, with the certified digest re-verified on every view.
 import type { RequestEvent } from '@sveltejs/kit';
 import { Op, type WhereOptions } from 'sequelize';
@@ -29,6 +30,10 @@ export interface PqrView {
 	values: PqrValues;
 	tests: TestResult[];
 	qualified: PqrQualified;
+	/** Governing code of the PQR (migration 0011). */
+	code: string;
+	/** The ISO 15614-1 result set, for an ISO PQR (shown beside the ASME one). */
+	iso: IsoResultSet | null;
 	author: string;
 	certified: { by: string; at: string; digest: string } | null;
 	/** False when the stored content no longer gives the certified digest. */
@@ -145,6 +150,9 @@ export async function getPqr(
 		tests,
 		// As stored (and, once certified, as signed); recomputed only if the stored one is unreadable.
 		qualified: (safe(p.qualified) as PqrQualified | null) ?? qualifiedRanges(values),
+		// Issue 15: an ISO 15614-1 PQR shows the ISO result set beside the ASME one (computed now).
+		code: p.code,
+		iso: p.code === 'iso-15614-1' ? isoResultSet(values, tests) : null,
 		author: author?.name ?? 'former member',
 		certified:
 			p.certifiedAt && p.certifiedDigest

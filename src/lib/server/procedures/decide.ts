@@ -183,11 +183,11 @@ export async function approveRevision(
 		throw new ForbiddenError('Only an inspector can approve a revision.');
 	// Wrong passwords here count with those at sign-in: a borrowed session must not become a
 	// way to guess the account's password.
-	if (isLockedOut(actor.email)) throw new RefusedError(TOO_MANY_PASSWORDS, 'password');
+	if (await isLockedOut(actor.email)) throw new RefusedError(TOO_MANY_PASSWORDS, 'password');
 	// The password is checked before the write lock is taken (bcrypt is slow on purpose).
 	const me = await User.findOne({ where: { id: actor.id, shopId: actor.shopId, active: true } });
 	if (!(await verifyPassword(input.password, me?.passwordHash))) {
-		recordFailure(actor.email);
+		const locked = await recordFailure(actor.email);
 		const revision = await findRevision(actor, procedureId, rev);
 		await write((t) =>
 			audit(
@@ -203,12 +203,9 @@ export async function approveRevision(
 				t
 			)
 		);
-		throw new RefusedError(
-			isLockedOut(actor.email) ? TOO_MANY_PASSWORDS : WRONG_PASSWORD,
-			'password'
-		);
+		throw new RefusedError(locked ? TOO_MANY_PASSWORDS : WRONG_PASSWORD, 'password');
 	}
-	clearFailures(actor.email);
+	await clearFailures(actor.email);
 	const d: Decision = { meaning: 'approved', comment: input.comment.trim() || null };
 	const r = await decide(actor, procedureId, rev, d, event);
 	const mailed = opts.notify === false ? true : await mailAuthor(actor, procedureId, rev, r, d);

@@ -1,3 +1,4 @@
+import type { Transfer } from '$reference/types';
 // One revision as its pages and the API show it: values, findings, links, sign-offs and the
 // integrity check that every view of a signed revision runs (a mismatch is written to the trail).
 import type { RequestEvent } from '@sveltejs/kit';
@@ -95,8 +96,20 @@ export async function pqrsFor(shopId: number, ids: number[]) {
 		} catch {
 			qualified = null;
 		}
-		return { row: p, qualified };
+		return { row: p, qualified, coupon: couponOf(p.actualValues) };
 	});
+}
+
+/** Coupon thickness and transfer from a PQR's stored actual values (for D1.1 and ISO ranges). */
+function couponOf(json: string): { thicknessMm: number | null; transfer: Transfer | null } {
+	try {
+		const v = JSON.parse(json) as { couponThicknessMm?: unknown; transfer?: unknown };
+		const t = typeof v.couponThicknessMm === 'number' ? v.couponThicknessMm : null;
+		const tr = typeof v.transfer === 'string' ? (v.transfer as Transfer) : null;
+		return { thicknessMm: t, transfer: tr };
+	} catch {
+		return { thicknessMm: null, transfer: null };
+	}
 }
 
 export async function findingsFor(
@@ -108,7 +121,9 @@ export async function findingsFor(
 	const pqrs = await pqrsFor(shopId, pqrIds);
 	return revisionFindings(
 		variables,
-		pqrs.flatMap((p) => (p.qualified ? [{ number: p.row.number, qualified: p.qualified }] : [])),
+		pqrs.flatMap((p) =>
+			p.qualified ? [{ number: p.row.number, qualified: p.qualified, coupon: p.coupon }] : []
+		),
 		system
 	);
 }
@@ -179,7 +194,9 @@ export async function getRevision(
 		await reportTamper(actor, actor.shopId, r.id, integrity, event);
 	const findings = revisionFindings(
 		variables,
-		pqrs.flatMap((p) => (p.qualified ? [{ number: p.row.number, qualified: p.qualified }] : [])),
+		pqrs.flatMap((p) =>
+			p.qualified ? [{ number: p.row.number, qualified: p.qualified, coupon: p.coupon }] : []
+		),
 		actor.unitSystem
 	);
 	const author = AUTHOR_ROLES.includes(actor.role);

@@ -67,7 +67,7 @@ describe('signing', () => {
 		const id = await inReview();
 		const wrong = () =>
 			svc.approveRevision(a.inspector, id, 1, { password: 'not it', comment: '' }, null, quiet);
-		clearFailures(a.inspector.email);
+		await clearFailures(a.inspector.email);
 		try {
 			for (let i = 0; i < 9; i++) await expect(wrong()).rejects.toThrow(svc.WRONG_PASSWORD);
 			// The tenth is the last one the limit takes (the same ten as at sign-in).
@@ -77,7 +77,7 @@ describe('signing', () => {
 			).rejects.toThrow(svc.TOO_MANY_PASSWORDS);
 			expect(await state(id, 1)).toBe('in-review');
 		} finally {
-			clearFailures(a.inspector.email);
+			await clearFailures(a.inspector.email);
 		}
 	});
 

@@ -4,6 +4,7 @@ import { Shop, User } from '../models';
 import { DEMO_PEOPLE, DEMO_SHOP, OTHER_PEOPLE, OTHER_SHOP, type DemoPerson } from './demo-people';
 import { seedWelders } from './seed-welders';
 import { seedProcedures } from './seed-procedures';
+import { seedIsoPqr } from './seed-iso';
 import { seedRecords } from './seed-records';
 
 async function seedShop(name: string, people: DemoPerson[]): Promise<Shop> {
@@ -39,5 +40,6 @@ export async function seedDemo(): Promise<{ shop: Shop; other: Shop }> {
 	await seedWelders(shop);
 	await seedRecords(shop);
 	await seedProcedures(shop);
+	await seedIsoPqr(shop);
 	return { shop, other };
 }

@@ -10,6 +10,7 @@ process.env.UPLOADS_DIR = join(dir, 'uploads');
 const { migrate } = await import('../db');
 const { seedDemo } = await import('./seed-demo');
 const { seedProcedures } = await import('./seed-procedures');
+const { seedIsoPqr } = await import('./seed-iso');
 const { Pqr, Procedure, ProcedureRevision } = await import('../models');
 const { checkIntegrity } = await import('../procedures');
 
@@ -25,7 +26,11 @@ describe('demo procedures', () => {
 			['approved', 'superseded', 'withdrawn'].includes(x.state)
 		))
 			expect(await checkIntegrity(r.id)).toMatchObject({ signed: true, ok: true });
-		expect(await Pqr.count({ where: { shopId: shop.id, state: 'certified' } })).toBe(4);
+		// Four ASME PQRs and the ISO 15614-1 coupon (seed-iso.ts, issue 15).
+		expect(await Pqr.count({ where: { shopId: shop.id, state: 'certified' } })).toBe(5);
+		const iso = await Pqr.findOne({ where: { shopId: shop.id, code: 'iso-15614-1' } });
+		expect(iso?.number).toBe('PQR-ISO-01');
+		expect(await seedIsoPqr(shop)).toBe(0);
 		expect(await seedProcedures(shop)).toBe(0);
 		expect(await Procedure.count({ where: { shopId: shop.id } })).toBe(4);
 	});

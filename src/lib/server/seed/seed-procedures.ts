@@ -13,7 +13,7 @@ import { DEMO_PEOPLE } from './demo-people';
 
 const quiet = { notify: false };
 
-async function member(email: string, shop: Shop): Promise<SessionUser | null> {
+export async function member(email: string, shop: Shop): Promise<SessionUser | null> {
 	const u = await User.findOne({ where: { email, shopId: shop.id } });
 	return u
 		? {

@@ -6,7 +6,14 @@ import { parseDate } from '$lib/weld/continuity';
 import { audit } from '../audit';
 import { write } from '../db';
 import { insertUnlessDuplicate } from '../db/dialect';
-import { ContinuityEntry, Qualification, QualificationConfirmation, User, Welder } from '../models';
+import {
+	ContinuityEntry,
+	ContinuityTap,
+	Qualification,
+	QualificationConfirmation,
+	User,
+	Welder
+} from '../models';
 import type { ContinuitySource } from '../models/continuity-entry';
 import { ForbiddenError, NotFoundError, RefusedError } from '../people/errors';
 import { actingMember, MANAGE_ROLES } from './access';
@@ -27,6 +34,8 @@ export interface RecordContinuityInput {
 	/** Who records it: the welder themself for a booth tap, an engineer or admin for manual. */
 	actor: { id: string; name?: string };
 	event?: RequestEvent | null;
+	/** A tap from a phone with the id it made: kept once (see models/continuity-tap.ts). */
+	tap?: { clientId: string; madeAt: Date; linkId: number | null };
 }
 
 export interface RecordedUse {
@@ -105,6 +114,27 @@ export async function recordContinuity(input: RecordContinuityInput): Promise<Re
 			transaction: t,
 			rejectOnEmpty: true
 		});
+		// A second arrival of the same tap id fails the unique index here and rolls all of it back.
+		if (input.tap)
+			await ContinuityTap.create(
+				{
+					shopId: input.shopId,
+					userId: recorder.id,
+					clientId: input.tap.clientId,
+					linkId: input.tap.linkId,
+					continuityEntryId: entry.id,
+					outcome: created ? 'logged' : 'already',
+					message: null,
+					madeAt: input.tap.madeAt,
+					receivedAt: now
+				},
+				{ transaction: t }
+			);
+		const tap = input.tap && {
+			id: input.tap.clientId,
+			madeAt: input.tap.madeAt.toISOString(),
+			receivedAt: now.toISOString()
+		};
 		if (created)
 			await audit(
 				{
@@ -113,7 +143,7 @@ export async function recordContinuity(input: RecordContinuityInput): Promise<Re
 					action: 'continuity.recorded',
 					objectType: 'welder',
 					objectId: welder.id,
-					after: { process: input.process, usedOn, source: input.source, note }
+					after: { process: input.process, usedOn, source: input.source, note, ...(tap && { tap }) }
 				},
 				input.event ?? null,
 				t

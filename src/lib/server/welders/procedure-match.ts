@@ -63,12 +63,14 @@ export function positionsNeeded(list: readonly string[]): WeldPosition[] {
 }
 
 /**
- * ASME IX QW-433 as recalled: for SMAW a higher F-Number 1 to 4 also qualifies the lower ones
- * (F-4 covers F-1 to F-4); every other case needs the same F-Number.
+ * ASME IX QW-433, simplified: for SMAW a higher F-Number 1 to 4 also qualifies the lower ones
+ * (F-4 covers F-1 to F-4; the with/without backing split is not modelled); every other case,
+ * e.g. F-6, needs the same F-Number. As summarised in a public welder-variables sheet (QW-404.15
+ * "F-Number as permitted in QW-433": "All F No. up to F No. qualified"; "All F No. 6").
  */
 export const F_NUMBER_SOURCE: FindingSource = {
-	label: 'ASME BPVC Section IX QW-433 (F-Number alternates), recalled',
-	kind: 'from memory'
+	label: 'ASME BPVC Section IX QW-433 (F-Number alternates), simplified',
+	kind: 'published'
 };
 export function fNumberCovers(process: string, held: number, needed: number): boolean {
 	if (held === needed) return true;

@@ -170,9 +170,9 @@ describe('procedure match helpers', () => {
 		expect(positionsNeeded(['f', 'h'])).toEqual(['F', 'H']);
 	});
 	it('F-Numbers: same number, or SMAW F-4 down to F-1', () => {
-		expect(fNumberCovers('GTAW', 6, 6)).toBe(true); // from memory (QW-433)
-		expect(fNumberCovers('GMAW', 6, 5)).toBe(false); // from memory (QW-433)
-		expect(fNumberCovers('SMAW', 4, 3)).toBe(true); // from memory (QW-433)
-		expect(fNumberCovers('SMAW', 3, 4)).toBe(false); // from memory (QW-433)
+		expect(fNumberCovers('GTAW', 6, 6)).toBe(true); // ASME IX QW-433 (public welder-variables summary)
+		expect(fNumberCovers('GMAW', 6, 5)).toBe(false); // ASME IX QW-433 (public welder-variables summary)
+		expect(fNumberCovers('SMAW', 4, 3)).toBe(true); // ASME IX QW-433 (public welder-variables summary)
+		expect(fNumberCovers('SMAW', 3, 4)).toBe(false); // ASME IX QW-433 (public welder-variables summary)
 	});
 });

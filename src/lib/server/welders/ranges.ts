@@ -7,7 +7,9 @@ import {
 	welderDiameterRange,
 	welderPositions
 } from '$lib/weld/qualified-ranges';
+import type { IsoWelderItem } from '$lib/weld/iso-9606-ranges';
 import { lengthToMm, mmToLength, type LengthUnit } from '$lib/weld/units';
+import { isoRangesFor } from './iso-ranges';
 
 export interface QualificationFacts {
 	code: string;
@@ -18,6 +20,8 @@ export interface QualificationFacts {
 	depositLayers: number | null;
 	lengthUnit: LengthUnit;
 	fNumber: number | null;
+	process?: string;
+	couponThicknessMm?: number;
 }
 
 export interface QualifiedRanges {
@@ -35,6 +39,8 @@ export interface QualifiedRanges {
 	fNumber: number | null;
 	/** Said once beside the ranges when the code tested to is not ASME IX. */
 	codeNote: string | null;
+	/** ISO 9606-1 qualifications: the ranges in ISO 9606-1's own terms (clause by clause). */
+	iso: IsoWelderItem[] | null;
 }
 
 export const splitPositions = (s: string): string[] =>
@@ -82,6 +88,16 @@ export function qualifiedRanges(q: QualificationFacts): QualifiedRanges {
 		codeNote:
 			q.code === 'ASME IX'
 				? null
-				: `Ranges are computed with ASME IX tables; ${q.code} sets its own ranges. Check them in ${q.code}.`
+				: q.code === 'ISO 9606-1'
+					? 'ISO 9606-1 ranges in its own terms are listed below; the ASME IX rows above are for comparison only. Check them in ISO 9606-1.'
+					: `Ranges are computed with ASME IX tables; ${q.code} sets its own ranges. Check them in ${q.code}.`,
+		iso: isoRangesFor({
+			code: q.code,
+			process: q.process,
+			testPositions: splitPositions(q.testPositions),
+			couponType: q.couponType,
+			couponDiameterMm: q.couponDiameterMm,
+			couponThicknessMm: q.couponThicknessMm
+		})
 	};
 }

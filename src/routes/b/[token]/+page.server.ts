@@ -4,9 +4,12 @@ import {
 	boothLimiter,
 	logLookup,
 	memberView,
+	receiveTap,
 	resolveBoothToken,
 	tapContinuity
 } from '$lib/server/booth';
+import { postedForm } from '$lib/server/forms/posted-form';
+import { boothTapSchema } from '$lib/schemas/booth-tap';
 import { ForbiddenError, RefusedError } from '$lib/server/people/errors';
 import { VIEW_ROLES } from '$lib/server/procedures/access';
 import type { Actions, PageServerLoad } from './$types';
@@ -51,6 +54,8 @@ export const load: PageServerLoad = async (event) => {
 		checkedAt: new Date().toISOString(),
 		signedIn: !!user,
 		otherShop: !!user && !member,
+		// The tap form carries an id of its own: a resent form (or the phone's queue) counts once.
+		tapId: showValues ? crypto.randomUUID() : null,
 		member: showValues && member ? await memberView(member, status, event) : null,
 		links: member
 			? {
@@ -70,6 +75,20 @@ export const actions: Actions = {
 			return fail(429, { problem: 'Too many requests from here. Wait a minute.' });
 		const status = await resolveBoothToken(event.params.token);
 		if (!status || status.shopId !== user.shopId) error(404, { message: UNKNOWN });
+		const tapId = (await postedForm(event.request)).get('tapId');
+		const withId = boothTapSchema.shape.id.safeParse(tapId);
+		if (withId.success) {
+			const r = await receiveTap(
+				user,
+				event.params.token,
+				{ id: withId.data, madeAt: new Date() },
+				event
+			);
+			if (r.outcome === 'refused') return fail(400, { problem: r.message });
+			// A repeat of an id that logged is "already logged" on the page: it changed nothing now.
+			const created = r.outcome === 'logged' && !r.repeat;
+			return { logged: { created, usedOn: r.usedOn, process: r.process } };
+		}
 		try {
 			const r = await tapContinuity(user, status, event);
 			return { logged: { created: r.created, usedOn: r.usedOn, process: r.process } };

@@ -6,7 +6,10 @@ import * as procedures from './0004-procedures';
 import * as welders from './0005-welders';
 import * as boothLinks from './0006-booth-links';
 import * as recordsFilterIndex from './0007-records-filter-index';
+import * as sharedState from './0008-shared-state';
 import * as recordsSearch from './0009-records-search';
+import * as continuityTaps from './0010-continuity-taps';
+import * as governingCode from './0011-governing-code';
 
 export interface Migration {
 	name: string;
@@ -24,5 +27,8 @@ export const migrations: Migration[] = [
 	{ name: '0005-welders', ...welders },
 	{ name: '0006-booth-links', ...boothLinks },
 	{ name: '0007-records-filter-index', ...recordsFilterIndex },
-	{ name: '0009-records-search', ...recordsSearch }
+	{ name: '0008-shared-state', ...sharedState },
+	{ name: '0009-records-search', ...recordsSearch },
+	{ name: '0010-continuity-taps', ...continuityTaps },
+	{ name: '0011-governing-code', ...governingCode }
 ];

@@ -10,6 +10,8 @@ CREATE INDEX `booth_links_shop_id_revision_id` ON `booth_links` (`shop_id`, `rev
 
 CREATE UNIQUE INDEX `booth_links_token` ON `booth_links` (`token`);
 
+CREATE UNIQUE INDEX `booth_lookups_bucket_window_start` ON `booth_lookups` (`bucket`, `window_start`);
+
 CREATE INDEX `booth_lookups_link_id_at` ON `booth_lookups` (`link_id`, `at`);
 
 CREATE INDEX `booth_lookups_shop_id_at` ON `booth_lookups` (`shop_id`, `at`);
@@ -17,6 +19,8 @@ CREATE INDEX `booth_lookups_shop_id_at` ON `booth_lookups` (`shop_id`, `at`);
 CREATE INDEX `continuity_entries_shop_id_welder_id_used_on` ON `continuity_entries` (`shop_id`, `welder_id`, `used_on`);
 
 CREATE UNIQUE INDEX `continuity_entries_welder_id_process_used_on` ON `continuity_entries` (`welder_id`, `process`, `used_on`);
+
+CREATE INDEX `continuity_taps_shop_id_received_at` ON `continuity_taps` (`shop_id`, `received_at`);
 
 CREATE UNIQUE INDEX `lapse_notices_qualification_id_lapses_on_kind` ON `lapse_notices` (`qualification_id`, `lapses_on`, `kind`);
 
@@ -98,6 +102,8 @@ CREATE UNIQUE INDEX `welders_shop_id_stamp` ON `welders` (`shop_id`, `stamp`);
 
 CREATE UNIQUE INDEX `welders_user_id` ON `welders` (`user_id`);
 
+CREATE INDEX `window_counters_window_end` ON `window_counters` (`window_end`);
+
 CREATE TABLE `accounts` (`id` UUID PRIMARY KEY, `type` VARCHAR(255) NOT NULL, `provider` VARCHAR(255) NOT NULL, `provider_account_id` VARCHAR(255) NOT NULL, `refresh_token` VARCHAR(255), `access_token` VARCHAR(255), `expires_at` INTEGER, `token_type` VARCHAR(255), `scope` VARCHAR(255), `id_token` TEXT, `session_state` VARCHAR(255), `user_id` UUID REFERENCES `users` (`id`) ON DELETE CASCADE);
 
 CREATE TABLE `api_tokens` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `name` VARCHAR(80) NOT NULL, `role` VARCHAR(20) NOT NULL, `token_hash` VARCHAR(64) NOT NULL UNIQUE, `prefix` VARCHAR(16) NOT NULL, `created_by_id` UUID NOT NULL REFERENCES `users` (`id`), `last_used_at` DATETIME, `revoked_at` DATETIME, `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL);
@@ -106,11 +112,15 @@ CREATE TABLE `audit_events` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` I
 
 CREATE TABLE `booth_links` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `procedure_id` INTEGER NOT NULL REFERENCES `procedures` (`id`), `revision_id` INTEGER NOT NULL REFERENCES `procedure_revisions` (`id`), `token` VARCHAR(40) NOT NULL, `issued_at` DATETIME NOT NULL, `issued_by_id` UUID REFERENCES `users` (`id`), `revoked_at` DATETIME, `revoked_by_id` UUID REFERENCES `users` (`id`), `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL);
 
-CREATE TABLE `booth_lookups` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER REFERENCES `shops` (`id`), `link_id` INTEGER REFERENCES `booth_links` (`id`), `outcome` VARCHAR(12) NOT NULL, `user_id` UUID REFERENCES `users` (`id`), `ip` VARCHAR(64), `user_agent` VARCHAR(300), `at` DATETIME NOT NULL);
+CREATE TABLE `booth_lookups` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER REFERENCES `shops` (`id`), `link_id` INTEGER REFERENCES `booth_links` (`id`), `outcome` VARCHAR(12) NOT NULL, `user_id` UUID REFERENCES `users` (`id`), `ip` VARCHAR(64), `user_agent` VARCHAR(300), `at` DATETIME NOT NULL, `bucket` VARCHAR(120), `window_start` BIGINT, `hits` INTEGER NOT NULL DEFAULT 1, `last_at` DATETIME);
 
 CREATE TABLE `continuity_entries` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `welder_id` INTEGER NOT NULL REFERENCES `welders` (`id`), `process` VARCHAR(8) NOT NULL, `used_on` DATE NOT NULL, `source` VARCHAR(8) NOT NULL, `note` VARCHAR(500), `recorded_by_id` UUID REFERENCES `users` (`id`), `recorded_by_name` VARCHAR(120) NOT NULL, `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL);
 
+CREATE TABLE "continuity_taps" (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `user_id` UUID NOT NULL REFERENCES `users` (`id`), `client_id` VARCHAR(64) NOT NULL, `link_id` INTEGER REFERENCES `booth_links` (`id`), `continuity_entry_id` INTEGER REFERENCES `continuity_entries` (`id`), `outcome` VARCHAR(12) NOT NULL, `message` VARCHAR(300), `made_at` DATETIME NOT NULL, `received_at` DATETIME NOT NULL, CONSTRAINT `continuity_taps_user_client_unique` UNIQUE (`user_id`, `client_id`));
+
 CREATE TABLE `invites` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `email` VARCHAR(254) NOT NULL, `name` VARCHAR(120) NOT NULL, `role` VARCHAR(20) NOT NULL, `token_hash` VARCHAR(64) NOT NULL UNIQUE, `expires_at` DATETIME NOT NULL, `used_at` DATETIME, `invited_by_id` UUID NOT NULL REFERENCES `users` (`id`), `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL);
+
+CREATE TABLE `job_leases` (`name` VARCHAR(60) NOT NULL PRIMARY KEY, `holder` VARCHAR(120) NOT NULL DEFAULT '', `lease_until` BIGINT NOT NULL DEFAULT 0, `runs` INTEGER NOT NULL DEFAULT 0, `last_run_at` DATETIME);
 
 CREATE TABLE `lapse_notices` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `qualification_id` INTEGER NOT NULL REFERENCES `qualifications` (`id`), `lapses_on` DATE NOT NULL, `kind` VARCHAR(8) NOT NULL, `recipients` TEXT NOT NULL DEFAULT '', `sent_at` DATETIME, `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL);
 
@@ -118,7 +128,7 @@ CREATE TABLE `pqr_addenda` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` IN
 
 CREATE TABLE `pqr_reports` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `pqr_id` INTEGER NOT NULL REFERENCES `pqrs` (`id`), `storage_key` VARCHAR(80) NOT NULL UNIQUE, `original_name` VARCHAR(200) NOT NULL, `bytes` INTEGER NOT NULL, `sha256` VARCHAR(64) NOT NULL, `uploaded_by_id` UUID NOT NULL REFERENCES `users` (`id`), `removed_at` DATETIME, `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL);
 
-CREATE TABLE `pqrs` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `number` VARCHAR(40) NOT NULL, `title` VARCHAR(120) NOT NULL, `process` VARCHAR(8) NOT NULL, `state` VARCHAR(12) NOT NULL, `actual_values` TEXT NOT NULL, `tests` TEXT NOT NULL, `qualified` TEXT NOT NULL, `author_id` UUID NOT NULL REFERENCES `users` (`id`), `certified_by_id` UUID REFERENCES `users` (`id`), `certified_name` VARCHAR(120), `certified_at` DATETIME, `certified_digest` VARCHAR(64), `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL);
+CREATE TABLE `pqrs` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `number` VARCHAR(40) NOT NULL, `title` VARCHAR(120) NOT NULL, `process` VARCHAR(8) NOT NULL, `state` VARCHAR(12) NOT NULL, `actual_values` TEXT NOT NULL, `tests` TEXT NOT NULL, `qualified` TEXT NOT NULL, `author_id` UUID NOT NULL REFERENCES `users` (`id`), `certified_by_id` UUID REFERENCES `users` (`id`), `certified_name` VARCHAR(120), `certified_at` DATETIME, `certified_digest` VARCHAR(64), `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL, `code` VARCHAR(16) NOT NULL DEFAULT 'asme-ix');
 
 CREATE TABLE `procedure_numbering` (`shop_id` INTEGER PRIMARY KEY REFERENCES `shops` (`id`), `wps_pattern` VARCHAR(40) NOT NULL, `pqr_pattern` VARCHAR(40) NOT NULL, `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL);
 
@@ -156,7 +166,7 @@ CREATE TABLE 'settings_records_fts_docsize'(id INTEGER PRIMARY KEY, sz BLOB);
 
 CREATE TABLE 'settings_records_fts_idx'(segid, term, pgno, PRIMARY KEY(segid, term)) WITHOUT ROWID;
 
-CREATE TABLE `shops` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `name` VARCHAR(120) NOT NULL, `unit_system` VARCHAR(10) NOT NULL DEFAULT 'imperial', `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL);
+CREATE TABLE `shops` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `name` VARCHAR(120) NOT NULL, `unit_system` VARCHAR(10) NOT NULL DEFAULT 'imperial', `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL, `default_code` VARCHAR(16) NOT NULL DEFAULT 'asme-ix');
 
 CREATE TABLE `sign_offs` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `revision_id` INTEGER NOT NULL REFERENCES `procedure_revisions` (`id`), `user_id` UUID NOT NULL REFERENCES `users` (`id`), `printed_name` VARCHAR(120) NOT NULL, `role` VARCHAR(20) NOT NULL, `meaning` VARCHAR(12) NOT NULL, `comment` TEXT, `signed_at` DATETIME NOT NULL, `digest` VARCHAR(64) NOT NULL, `canonical` TEXT NOT NULL, `seal` VARCHAR(64) NOT NULL);
 
@@ -171,6 +181,8 @@ CREATE TABLE `verification_links` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop
 CREATE TABLE `verification_tokens` (`token` VARCHAR(255) PRIMARY KEY, `identifier` VARCHAR(255) NOT NULL, `expires` DATETIME NOT NULL);
 
 CREATE TABLE `welders` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `name` VARCHAR(120) NOT NULL, `stamp` VARCHAR(20) NOT NULL, `user_id` UUID REFERENCES `users` (`id`), `email` VARCHAR(254), `active` TINYINT(1) NOT NULL DEFAULT 1, `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL);
+
+CREATE TABLE `window_counters` (`key` VARCHAR(320) NOT NULL PRIMARY KEY, `hits` INTEGER NOT NULL DEFAULT 0, `window_end` BIGINT NOT NULL);
 
 CREATE TRIGGER audit_events_no_delete BEFORE DELETE ON audit_events
 		BEGIN SELECT RAISE(ABORT, 'audit events are append-only'); END;

@@ -1,0 +1,42 @@
+import { describe, expect, it } from 'vitest';
+import { d11DiameterRange, d11ThicknessRange, d11WpsPositions } from './d1-1-ranges';
+
+// AWS D1.1/D1.1M:2015 Table 4.2 (CJP groove, plate) and Table 4.1 (WPS positions). // from memory
+describe('D1.1 WPS thickness qualified', () => {
+	it.each([
+		[6.35, 3.18, 12.7], // 1/4 in: 1/8 in to 2T // from memory
+		[9.525, 3.18, 19.05], // 3/8 in: 1/8 in to 2T // from memory
+		[19.05, 3.18, 38.1], // 3/4 in: 1/8 in to 2T // from memory
+		[25.4, 3.18, null] // 1 in and over: unlimited // from memory
+	])('T = %s mm: %s to %s mm', (t, min, max) => {
+		expect(d11ThicknessRange(t)).toMatchObject({ ok: true, minMm: min, maxMm: max });
+	});
+	it('has no row under 1/8 in and says so', () => {
+		expect(d11ThicknessRange(2).ok).toBe(false);
+	});
+	it('GMAW-S: not prequalified; no D1.1 GMAW-S thickness limit is modelled', () => {
+		const r = d11ThicknessRange(6.35, 'short-circuit');
+		expect(r.ok && r.notes[0]).toContain('not prequalified'); // D1.1:2000 3.2.2 (public copy)
+		expect(r.ok && r.source.kind).toBe('published');
+	});
+});
+
+describe('D1.1 WPS diameter and positions', () => {
+	it.each([
+		[60.3, 60.3], // job size under 24 in: the test diameter and over // from memory
+		[610, 609.6], // 24 in and over // from memory
+		[914.4, 609.6] // from memory
+	])('OD %s mm -> from %s mm', (od, min) => {
+		expect(d11DiameterRange(od)).toMatchObject({ ok: true, minMm: min, maxMm: null });
+	});
+	it.each([
+		[['1G'], ['F']], // from memory
+		[['3G'], ['V']], // from memory
+		[['5G'], ['F', 'V', 'OH']], // from memory
+		[['6G'], ['F', 'H', 'V', 'OH']], // from memory
+		[
+			['2G', '3G'],
+			['H', 'V']
+		] // union // from memory
+	])('%j -> %j', (t, p) => expect(d11WpsPositions(t).positions).toEqual(p));
+});

@@ -1,0 +1,216 @@
+// ISO 15614-1: every range one test coupon qualifies, each with its clause, from the rules in
+// iso-15614-ranges.ts. Pure; never throws.
+import { ISO_15614_1_DIAMETER } from '$reference/iso-15614-1';
+import { ISO_POSITIONS, type IsoPosition } from '$reference/iso-6947';
+import { ISO_15614_1_LEVELS, ISO_TR_15608 } from '$reference/sources';
+import { isNum, sourceOf, type FindingSource } from './findings';
+import {
+	ISO_15614_SOURCE as SRC,
+	isoDiameterRange,
+	isoHeatInputRange,
+	isoMaterialGroups,
+	isoThicknessRange,
+	type IsoCoupon,
+	type IsoJoint,
+	type IsoRangeItem,
+	type IsoSide
+} from './iso-15614-ranges';
+
+const isIsoPosition = (p: unknown): p is IsoPosition =>
+	typeof p === 'string' && (ISO_POSITIONS as readonly string[]).includes(p);
+
+function jointItem(joint: IsoJoint | undefined, side: IsoSide | undefined): IsoRangeItem | null {
+	if (!joint && !side) return null;
+	const what: string[] = [];
+	if (joint === 'butt-plate' || joint === 'butt-pipe')
+		what.push('butt welds, and fillet welds', joint === 'butt-pipe' ? 'branch connections' : '');
+	else if (joint === 'branch') what.push('branch connections at the angle tested and over');
+	else if (joint === 't-butt') what.push('T-joint butt welds and fillet welds');
+	else if (joint === 'fillet') what.push('fillet welds only');
+	if (side === 'one-side-no-backing')
+		what.push('welded from one side without backing, from one side with backing, and both sides');
+	else if (side === 'one-side-backing') what.push('one side with backing, and both sides');
+	else if (side === 'both-sides') what.push('both sides, and one side with backing');
+	return {
+		variable: 'Joint type',
+		clause: '8.4.3',
+		qualified: what.filter(Boolean).join('; '),
+		notes: [],
+		source: SRC
+	};
+}
+
+/** Every range one coupon qualifies, each with its clause. Never throws. */
+export function isoProcedureRanges(input: unknown): {
+	level: 1 | 2;
+	items: IsoRangeItem[];
+	notes: string[];
+	source: FindingSource;
+} {
+	const c = (typeof input === 'object' && input !== null ? input : {}) as IsoCoupon;
+	const level = c.level === 1 ? 1 : 2;
+	const items: IsoRangeItem[] = [];
+	const notes: string[] = [
+		'Level 2 qualifies level 1 as well, not the reverse; with no level in the contract, level 2 applies.'
+	];
+	if (level === 1)
+		notes.push(
+			'Level 1: Beadline shows the level 2 ranges (the level 1 columns are not modelled); confirm them in ISO 15614-1:2017.'
+		);
+	try {
+		if (typeof c.process === 'string' && c.process.trim()) {
+			const p = c.process.trim().slice(0, 10);
+			const t = c.transfer;
+			const mig = /^13[1-8]$/.test(p);
+			items.push({
+				variable: 'Process',
+				clause: '8.4.1',
+				qualified: `${p} only${mig && t ? (t === 'short-circuit' ? ', short-circuit transfer only' : ', spray, pulsed or globular transfer (not short-circuit)') : ''}`,
+				notes: [],
+				source: SRC
+			});
+		}
+		const t = c.thicknessMm;
+		if (isNum(t)) {
+			const th = isoThicknessRange(t, c.runs ?? 'multi');
+			if (th.ok)
+				items.push({
+					variable: 'Parent material thickness',
+					clause: '8.3.2.1, Table 6',
+					qualified: `${th.min}${th.max === null ? ' mm and over' : `–${th.max} mm`}`,
+					range: { min: th.min, max: th.max, unit: 'mm' },
+					notes: [
+						c.joint === 'fillet'
+							? 'Fillet welds: the fillet table (throat thickness) applies; not modelled here, the butt row is shown.'
+							: '',
+						...th.notes
+					].filter(Boolean),
+					source: SRC
+				});
+		}
+		if (isNum(c.outsideDiameterMm)) {
+			const d = isoDiameterRange(c.outsideDiameterMm);
+			if (d.ok)
+				items.push({
+					variable: 'Pipe outside diameter',
+					clause: '8.3.2.2, Table 7',
+					qualified: `${d.min}${d.max === null ? ' mm and over' : `–${d.max} mm`}`,
+					range: { min: d.min, max: d.max, unit: 'mm' },
+					notes: [],
+					source: SRC
+				});
+		} else if (c.joint === 'butt-plate')
+			items.push({
+				variable: 'Pipe outside diameter',
+				clause: '8.3.2.2',
+				qualified: `pipe over ${ISO_15614_1_DIAMETER.plateQualifiesPipeOverMm} mm OD (over ${ISO_15614_1_DIAMETER.plateRotatedQualifiesPipeOverMm} mm when welded rotated in PA or PC)`,
+				range: { min: ISO_15614_1_DIAMETER.plateQualifiesPipeOverMm, max: null, unit: 'mm' },
+				notes: [],
+				source: SRC
+			});
+		if (typeof c.materialGroup === 'string' && c.materialGroup.trim()) {
+			const g = isoMaterialGroups(c.materialGroup);
+			items.push({
+				variable: 'Parent material group (ISO/TR 15608)',
+				clause: '8.3.1.1, Table 3',
+				qualified: g.known
+					? g.qualified.join(', ')
+					: `${g.qualified.join(', ')} only (group not in Beadline's ISO/TR 15608 list)`,
+				notes: ['Dissimilar joints (two groups) are not modelled.'],
+				source: sourceOf(ISO_TR_15608)
+			});
+		}
+		if (isNum(c.heatInputKjPerMm)) {
+			const h = isoHeatInputRange(c.heatInputKjPerMm, c.impact, c.hardness);
+			if (h.ok) {
+				const txt =
+					h.min === null && h.max === null
+						? 'not limited (no impact or hardness requirements)'
+						: `${h.min === null ? 'no lower limit' : `${h.min} kJ/mm`} to ${h.max === null ? 'no upper limit' : `${h.max} kJ/mm`}`;
+				items.push({
+					variable: 'Heat input',
+					clause: '8.4.7',
+					qualified: txt,
+					...(h.min !== null || h.max !== null
+						? { range: { min: h.min ?? 0, max: h.max, unit: 'kJ/mm' } }
+						: {}),
+					notes: [],
+					source: SRC
+				});
+			}
+		}
+		if (c.position !== undefined) {
+			const p = isIsoPosition(c.position) ? c.position : null;
+			const strict = c.impact === true || c.hardness === true;
+			items.push({
+				variable: 'Welding position (ISO 6947)',
+				clause: '8.4.2',
+				qualified: !p
+					? 'unknown position given'
+					: strict
+						? `${p}; all positions only when impact specimens come from the highest and hardness from the lowest heat-input position`
+						: 'all positions (no impact or hardness requirements)',
+				notes: ['Vertical-down positions (PG, PJ, J-L045): confirm in 8.4.2; not modelled.'],
+				source: SRC
+			});
+		}
+		const joint = jointItem(c.joint, c.side);
+		if (joint) items.push(joint);
+		if (typeof c.filler?.designation === 'string' && c.filler.designation.trim())
+			items.push({
+				variable: 'Filler material',
+				clause: '8.4.4',
+				qualified: `${c.filler.designation.trim().slice(0, 40)} and fillers of equivalent mechanical properties, the same type of covering, core or flux, the same nominal composition and the same or lower hydrogen${c.impact === true && c.filler.make ? `; with impact requirements, the make tested (${c.filler.make.slice(0, 40)})` : ''}`,
+				notes: [],
+				source: SRC
+			});
+		if (typeof c.gas === 'string' && c.gas.trim())
+			items.push({
+				variable: 'Shielding gas (ISO 14175)',
+				clause: '8.4.5',
+				qualified: `${c.gas.trim().slice(0, 20)} (the designation used in the test)`,
+				notes: [],
+				source: SRC
+			});
+		if (c.currentType === 'AC' || c.currentType === 'DCEN' || c.currentType === 'DCEP') {
+			const mma = c.process?.trim() === '111';
+			items.push({
+				variable: 'Current type and polarity',
+				clause: '8.4.6',
+				qualified: `${c.currentType}${c.pulsed ? ' pulsed' : ''} as tested${mma && c.currentType === 'AC' && c.impact !== true ? '; for 111, AC also covers DC (both polarities) without impact requirements' : ''}`,
+				notes: [],
+				source: SRC
+			});
+		}
+		if (isNum(c.preheatC) && c.preheatC > -60 && c.preheatC < 1000)
+			items.push({
+				variable: 'Preheat',
+				clause: '8.4.8',
+				qualified: `at least ${Math.round(c.preheatC)} °C (the preheat at the start of the test)`,
+				range: { min: Math.round(c.preheatC), max: null, unit: 'degC' },
+				notes: [],
+				source: SRC
+			});
+		if (isNum(c.interpassMaxC) && c.interpassMaxC > -60 && c.interpassMaxC < 1000)
+			items.push({
+				variable: 'Interpass temperature',
+				clause: '8.4.9',
+				qualified: `at most ${Math.round(c.interpassMaxC)} °C (the highest reached in the test)`,
+				notes: [],
+				source: SRC
+			});
+		if (typeof c.pwht === 'boolean')
+			items.push({
+				variable: 'Post-weld heat treatment',
+				clause: '8.4.10',
+				qualified: c.pwht
+					? 'the heat treatment tested'
+					: 'no heat treatment (adding one needs a new test)',
+				notes: [],
+				source: SRC
+			});
+	} catch {
+		// A malformed part of the coupon leaves the items found so far.
+	}
+	return { level, items, notes, source: sourceOf(ISO_15614_1_LEVELS) };
+}
