@@ -7,6 +7,13 @@ import { orExit } from '../src/lib/server/config-error';
 import { checkStorage, closeStorage } from '../src/lib/server/storage/select';
 import { createBackup } from './lib/backup';
 
+if (config.database.kind !== 'sqlite') {
+	console.error(
+		"DATABASE_URL names a PostgreSQL database: npm run db:backup backs up the SQLite file only; use pg_dump / pg_restore (and the bucket's own versioning) there."
+	);
+	process.exit(1);
+}
+
 function argValue(name: string): string | undefined {
 	const i = process.argv.indexOf(name);
 	return i >= 0 ? process.argv[i + 1] : undefined;

@@ -7,6 +7,13 @@ import { orExit } from '../src/lib/server/config-error';
 import { closeStorage, storage } from '../src/lib/server/storage/select';
 import { restoreBackup } from './lib/backup';
 
+if (config.database.kind !== 'sqlite') {
+	console.error(
+		"DATABASE_URL names a PostgreSQL database: npm run db:restore restores the SQLite file only; use pg_dump / pg_restore (and the bucket's own versioning) there."
+	);
+	process.exit(1);
+}
+
 const dir = process.argv.slice(2).find((a) => !a.startsWith('--'));
 if (!dir) {
 	console.error('Usage: npm run db:restore -- <backup folder> [--force]');

@@ -1,6 +1,8 @@
-// npm test — everything CI checks, in order: types, lint, unit tests, build, end-to-end in Chromium.
+// npm test — everything CI checks, in order: types, lint, unit tests (on SQLite, then the data
+// layer's again on PostgreSQL), build, end-to-end in Chromium.
 import { execSync, spawnSync } from 'node:child_process';
 import { existsSync } from 'node:fs';
+import { postgresBinDir } from './lib/postgres';
 import { unexpectedBuildLines } from './lib/build-output';
 
 const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
@@ -22,15 +24,39 @@ function ensureChromium(): void {
 	});
 }
 
+/** The unit tests' PostgreSQL run starts a throw-away cluster of Debian's server (scripts/lib/postgres.ts). */
+function ensurePostgres(): void {
+	if (postgresBinDir()) return;
+	const root = process.getuid?.() === 0;
+	const apt = spawnSync('sh', ['-c', 'command -v apt-get'], { encoding: 'utf8' }).stdout.trim();
+	if (!root || !apt) {
+		console.error(
+			"No PostgreSQL server (initdb, pg_ctl) for the PostgreSQL unit tests. Install Debian's " +
+				'package (sudo apt-get install -y postgresql), then run npm test again.'
+		);
+		process.exit(1);
+	}
+	console.log('Installing Debian postgresql for the PostgreSQL unit tests…');
+	// The package starts a system cluster of its own; the tests never use it (their own port and folder).
+	execSync(
+		'apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq postgresql',
+		{
+			stdio: 'inherit'
+		}
+	);
+}
+
 const steps: Array<[string, string[]]> = [
 	['types', ['npm', 'run', 'check']],
 	['lint', ['npm', 'run', 'lint']],
 	['unit', ['npx', 'vitest', 'run']],
+	['unit on PostgreSQL', ['npx', 'vitest', 'run', '--config', 'vitest.postgres.config.ts']],
 	['build', ['npx', 'vite', 'build', '--logLevel', 'warn']],
 	['end-to-end', ['npx', 'playwright', 'test']]
 ];
 
 ensureChromium();
+ensurePostgres();
 const started = Date.now();
 for (const [name, [cmd, ...args]] of steps) {
 	const t = Date.now();

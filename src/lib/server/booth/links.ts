@@ -46,6 +46,12 @@ export async function issueBoothLink(
 	t: Transaction,
 	by: { id: string } | null = null
 ): Promise<BoothLink> {
+	// One live link per revision, even when two processes print its first sheet at once.
+	await ProcedureRevision.findByPk(revision.id, {
+		attributes: ['id'],
+		lock: t.LOCK.UPDATE,
+		transaction: t
+	});
 	const existing = await liveLink(revision.shopId, revision.id, t);
 	if (existing) return existing;
 	return BoothLink.create(

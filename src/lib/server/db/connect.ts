@@ -1,12 +1,14 @@
 // The first contact with the database at start-up. What can go wrong with the configuration (a
 // malformed DATABASE_URL, a server that does not answer, a refused password, a missing
 // database) becomes one sentence naming the variable, so the operator knows what to change.
+import type { Sequelize } from 'sequelize';
 import { config } from '../config';
 import { ConfigError } from '../config-error';
+import type { DatabaseTarget } from './database-url';
 import { sqlState } from './dialect';
 import { sequelize } from './sequelize';
 
-/** A configuration problem: its message is the whole story and is shown without a stack. */
+/** A database configuration problem: its message is the whole story and is shown without a stack. */
 export class DatabaseConfigError extends ConfigError {
 	override name = 'DatabaseConfigError';
 }
@@ -18,7 +20,7 @@ function codeOf(e: unknown): string {
 }
 
 /** The sentence for a failed first connection to PostgreSQL at `display` (a redacted URL). */
-export function postgresProblem(e: unknown, display: string): string {
+export function postgresProblem(e: unknown, display: string, name = 'DATABASE_URL'): string {
 	const code = codeOf(e);
 	const message = String((e as Error)?.message ?? e);
 	const host = (() => {
@@ -30,37 +32,43 @@ export function postgresProblem(e: unknown, display: string): string {
 		/Connection(Refused|TimedOut)Error|HostNotReachableError/.test(code) ||
 		/timeout|timed out|terminated/i.test(message)
 	)
-		return `DATABASE_URL names a PostgreSQL server at ${host} that does not answer: start it, or correct the host and port.`;
+		return `${name} names a PostgreSQL server at ${host} that does not answer: start it, or correct the host and port.`;
 	if (/^(ENOTFOUND|EAI_AGAIN)$/.test(code) || code === 'HostNotFoundError')
-		return `DATABASE_URL names the host ${host.replace(/:\d+$/, '')}, which cannot be found: correct the host name.`;
+		return `${name} names the host ${host.replace(/:\d+$/, '')}, which cannot be found: correct the host name.`;
 	if (code === '28P01' || code === '28000' || /password|authentication/i.test(message))
-		return `DATABASE_URL's user name or password was refused by the PostgreSQL server at ${host}: correct the credentials.`;
+		return `${name}'s user name or password was refused by the PostgreSQL server at ${host}: correct the credentials.`;
 	if (code === '3D000')
-		return `DATABASE_URL names a database that does not exist on the PostgreSQL server at ${host}: create it (createdb) or correct the name.`;
-	return `DATABASE_URL (${display}) could not be opened: ${message.replace(/\s+/g, ' ').slice(0, 200)}.`;
+		return `${name} names a database that does not exist on the PostgreSQL server at ${host}: create it (createdb) or correct the name.`;
+	return `${name} (${display}) could not be opened: ${message.replace(/\s+/g, ' ').slice(0, 200)}.`;
 }
 
-/** Refuses a bad configuration with a DatabaseConfigError; resolves once the database answers. */
-export async function checkDatabase(): Promise<void> {
-	const db = config.database;
+/**
+ * Refuses a bad configuration with a DatabaseConfigError; resolves once the database answers.
+ * By default the process's own database; db:copy passes its source and target (named --from, --to).
+ */
+export async function checkDatabase(
+	s: Sequelize = sequelize,
+	db: DatabaseTarget = config.database,
+	name = 'DATABASE_URL'
+): Promise<void> {
 	if (db.kind === 'invalid') throw new DatabaseConfigError(db.problem);
 	try {
-		await sequelize.authenticate();
+		await s.authenticate();
 	} catch (e) {
-		if (db.kind === 'postgres') throw new DatabaseConfigError(postgresProblem(e, db.display));
+		if (db.kind === 'postgres') throw new DatabaseConfigError(postgresProblem(e, db.display, name));
 		throw new DatabaseConfigError(
-			`The SQLite file ${db.file} (DATABASE_URL or DATABASE_FILE) could not be opened: ${codeOf(e) || (e as Error).message}.`
+			`The SQLite file ${db.file} (${name === 'DATABASE_URL' ? 'DATABASE_URL or DATABASE_FILE' : name}) could not be opened: ${codeOf(e) || (e as Error).message}.`
 		);
 	}
 }
 
 /**
  * For entry points (server start, scripts): `await migrate().catch(exitOnConfigError)`. A
- * DatabaseConfigError is printed as its one sentence and the process stops with status 1;
+ * ConfigError (DatabaseConfigError, or storage's) is printed as its one sentence and the process stops with status 1;
  * anything else is thrown on to the usual handling.
  */
 export function exitOnConfigError(e: unknown): never {
-	if (e instanceof DatabaseConfigError) {
+	if (e instanceof ConfigError) {
 		console.error(e.message);
 		process.exit(1);
 	}

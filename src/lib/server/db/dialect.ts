@@ -175,16 +175,22 @@ export async function tableNames(s: Sequelize): Promise<string[]> {
  * After rows were inserted with their ids (db:copy): PostgreSQL's sequences must move past the
  * highest id, or the next insert would collide. SQLite's AUTOINCREMENT follows by itself.
  */
-export async function resetSequences(s: Sequelize, tables: string[]): Promise<void> {
+export async function resetSequences(
+	s: Sequelize,
+	tables: string[],
+	t?: Transaction
+): Promise<void> {
 	if (!isPostgres(s)) return;
-	for (const table of tables) {
-		const [row] = await s.query<{ seq: string | null }>(
-			`SELECT pg_get_serial_sequence('"${table}"', 'id') AS seq`,
-			{ type: QueryTypes.SELECT }
-		);
-		if (!row?.seq) continue;
+	const serials = await s.query<{ t: string; seq: string | null }>(
+		`SELECT table_name AS t, pg_get_serial_sequence(quote_ident(table_name), 'id') AS seq
+		 FROM information_schema.columns WHERE table_schema = current_schema() AND column_name = 'id'`,
+		{ type: QueryTypes.SELECT, transaction: t }
+	);
+	for (const { t: table, seq } of serials) {
+		if (!seq || !tables.includes(table)) continue;
 		await s.query(
-			`SELECT setval('${row.seq}', COALESCE((SELECT MAX(id) FROM "${table}"), 0) + 1, false)`
+			`SELECT setval('${seq}', COALESCE((SELECT MAX(id) FROM "${table}"), 0) + 1, false)`,
+			{ transaction: t }
 		);
 	}
 }

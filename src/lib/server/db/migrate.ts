@@ -1,16 +1,30 @@
+import type { Sequelize } from 'sequelize';
 import { SequelizeStorage, Umzug } from 'umzug';
 import { checkDatabase } from './connect';
 import { afterMigrations, beforeMigrations, withMigrationLock } from './dialect';
 import { migrations } from './migrations';
 import { sequelize } from './sequelize';
 
-function umzug() {
+function umzug(s: Sequelize) {
 	return new Umzug({
 		migrations,
-		context: sequelize.getQueryInterface(),
-		storage: new SequelizeStorage({ sequelize, tableName: 'schema_migrations' }),
+		context: s.getQueryInterface(),
+		storage: new SequelizeStorage({ sequelize: s, tableName: 'schema_migrations' }),
 		logger: undefined
 	});
+}
+
+/** Applies the pending migrations to `s` (checked and reachable); the names applied. */
+export async function migrateDatabase(s: Sequelize): Promise<string[]> {
+	await beforeMigrations(s);
+	const applied = await withMigrationLock(s, () => umzug(s).up());
+	await afterMigrations(s);
+	return applied.map((m) => m.name);
+}
+
+/** The migrations `s` has not had yet. */
+export async function pendingMigrations(s: Sequelize): Promise<string[]> {
+	return (await umzug(s).pending()).map((m) => m.name);
 }
 
 let done: Promise<string[]> | undefined;
@@ -23,10 +37,7 @@ let done: Promise<string[]> | undefined;
 export function migrate(): Promise<string[]> {
 	done ??= (async () => {
 		await checkDatabase();
-		await beforeMigrations(sequelize);
-		const applied = await withMigrationLock(sequelize, () => umzug().up());
-		await afterMigrations(sequelize);
-		return applied.map((m) => m.name);
+		return migrateDatabase(sequelize);
 	})();
 	return done;
 }

@@ -3,6 +3,7 @@ import { dirname } from 'node:path';
 import pg from 'pg';
 import { Sequelize, type Options } from 'sequelize';
 import { config } from '../config';
+import type { DatabaseTarget } from './database-url';
 import { sqliteDriver } from './sqlite-driver';
 
 /** How long a PostgreSQL connection attempt may take before start-up says the server is unreachable. */
@@ -10,8 +11,8 @@ export const CONNECT_TIMEOUT_MS = 5000;
 
 const common = { logging: false, define: { underscored: true } } satisfies Options;
 
-function open(): Sequelize {
-	const db = config.database;
+/** A Sequelize instance for `db` (the process's own is `sequelize` below; db:copy opens two). */
+export function openSequelize(db: DatabaseTarget): Sequelize {
 	if (db.kind === 'postgres')
 		return new Sequelize(db.url, {
 			...common,
@@ -41,4 +42,4 @@ function open(): Sequelize {
 
 /** The one Sequelize instance of the process (Vite's dev reloads keep it on globalThis). */
 const holder = globalThis as unknown as { __beadlineSequelize?: Sequelize };
-export const sequelize: Sequelize = (holder.__beadlineSequelize ??= open());
+export const sequelize: Sequelize = (holder.__beadlineSequelize ??= openSequelize(config.database));

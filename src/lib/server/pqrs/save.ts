@@ -7,6 +7,7 @@ import { formToPqr, qualifiedRanges } from '$lib/procedures/pqr-values';
 import { audit } from '../audit';
 import type { SessionUser } from '../auth/session-user';
 import { write } from '../db';
+import { lockShop } from '../db/locks';
 import { Pqr, PqrAddendum } from '../models';
 import { NotFoundError, RefusedError } from '../people/errors';
 import { actingMember, actorOf, AUTHOR_ROLES, CERTIFY_ROLES } from '../procedures/access';
@@ -26,6 +27,8 @@ export async function findPqr(
 }
 
 async function refuseClash(shopId: number, number: string, id: number | null, t: Transaction) {
+	// Numbers are unique per shop whatever their case: one check-and-write at a time.
+	await lockShop(shopId, t);
 	const clash = await Pqr.findOne({
 		where: {
 			shopId,

@@ -8,6 +8,7 @@ import { emptyVariables } from '$lib/procedures/variables';
 import { audit } from '../audit';
 import type { SessionUser } from '../auth/session-user';
 import { write } from '../db';
+import { lockShop } from '../db/locks';
 import { Procedure, ProcedureRevision, SettingsRecord } from '../models';
 import { RefusedError } from '../people/errors';
 import { actingMember, actorOf, AUTHOR_ROLES } from './access';
@@ -21,6 +22,8 @@ export async function createProcedure(
 ): Promise<{ id: number; rev: number }> {
 	return write(async (t) => {
 		const me = await actingMember(actor, AUTHOR_ROLES, t);
+		// Numbers are unique per shop whatever their case: one check-and-create at a time.
+		await lockShop(actor.shopId, t);
 		const clash = await Procedure.findOne({
 			where: {
 				shopId: actor.shopId,

@@ -7,12 +7,21 @@ import type { SessionUser } from '../auth/session-user';
 import { Procedure, ProcedureRevision } from '../models';
 import { NotFoundError } from '../people/errors';
 
+/**
+ * Inside a write transaction the procedure's row stays locked until it ends (FOR UPDATE on
+ * PostgreSQL): every change of a procedure or its revisions (submit, decide, withdraw, new
+ * revision, edit) goes through here, so they take turns per procedure in any number of processes.
+ */
 export async function findProcedure(
 	actor: Pick<SessionUser, 'shopId'>,
 	id: number,
 	t?: Transaction
 ): Promise<Procedure> {
-	const p = await Procedure.findOne({ where: { id, shopId: actor.shopId }, transaction: t });
+	const p = await Procedure.findOne({
+		where: { id, shopId: actor.shopId },
+		transaction: t,
+		...(t ? { lock: t.LOCK.UPDATE } : {})
+	});
 	if (!p) throw new NotFoundError('No such procedure in your shop.');
 	return p;
 }

@@ -33,8 +33,13 @@ export function summary(w: Welder, userName: string | null = null): WelderSummar
 }
 
 /** One welder of the actor's shop; another shop's id is simply not found. */
+/** Inside a write transaction the welder's row stays locked until it ends (FOR UPDATE on PostgreSQL). */
 export async function findWelder(shopId: number, id: number, t?: Transaction): Promise<Welder> {
-	const w = await Welder.findOne({ where: { id, shopId }, transaction: t });
+	const w = await Welder.findOne({
+		where: { id, shopId },
+		transaction: t,
+		...(t ? { lock: t.LOCK.UPDATE } : {})
+	});
 	if (!w) throw new NotFoundError('No such welder in your shop.');
 	return w;
 }
