@@ -46,16 +46,22 @@ export function sha256File(path: string): Promise<string> {
 
 /** Row count and a SHA-256 over every row in rowid order, per table (the data, not the pages). */
 export async function tableSummaries(db: SqliteFile): Promise<Record<string, TableSummary>> {
-	const tables = await db.all<{ name: string }>(
-		"SELECT name FROM sqlite_master WHERE type = 'table' AND name NOT LIKE 'sqlite_%' ORDER BY name"
+	const tables = await db.all<{ name: string; sql: string | null }>(
+		"SELECT name, sql FROM sqlite_master WHERE type = 'table' AND name NOT LIKE 'sqlite_%' ORDER BY name"
 	);
 	const out: Record<string, TableSummary> = {};
-	for (const { name } of tables) {
+	for (const { name, sql } of tables) {
 		const hash = createHash('sha256');
 		let rows = 0;
+		// A WITHOUT ROWID table (the search index's shadow tables) has no rowid: every column orders it.
+		const order = /without\s+rowid/i.test(sql ?? '')
+			? (await db.all<{ name: string }>(`SELECT name FROM pragma_table_info('${name}')`))
+					.map((c) => `"${c.name}"`)
+					.join(', ')
+			: 'rowid';
 		await new Promise<void>((resolve, reject) => {
 			db.db.each(
-				`SELECT * FROM "${name}" ORDER BY rowid`,
+				`SELECT * FROM "${name}" ORDER BY ${order}`,
 				(err: Error | null, row: Record<string, unknown>) => {
 					if (err) return reject(err);
 					rows++;

@@ -21,8 +21,6 @@ export interface D11Range {
 	source: FindingSource;
 }
 
-const r2 = (n: number) => Math.round(n * 100) / 100;
-
 /** CJP groove plate test thickness (mm) -> nominal thickness qualified (mm). */
 export function d11ThicknessRange(
 	thicknessMm: unknown,
@@ -38,8 +36,8 @@ export function d11ThicknessRange(
 			message:
 				'D1.1 WPS qualification tests start at 1/8 in (3 mm); no row for a thinner test plate.'
 		};
-	const minMm = r2(Math.min(row.minIn * MM_PER_IN, thicknessMm));
-	const maxMm = row.maxTimesT === null ? null : r2(Math.max(row.maxTimesT * thicknessMm, minMm));
+	const minMm = Math.min(row.minIn * MM_PER_IN, thicknessMm);
+	const maxMm = row.maxTimesT === null ? null : Math.max(row.maxTimesT * thicknessMm, minMm);
 	const notes: string[] = [];
 	if (transfer === 'short-circuit')
 		notes.push(
@@ -63,7 +61,7 @@ export function d11DiameterRange(odMm: unknown): D11Range | { ok: false; message
 	return {
 		ok: true,
 		row: odMm < brk ? 'job-size test under 24 in' : 'test 24 in and over',
-		minMm: r2(odMm < brk ? odMm : brk),
+		minMm: odMm < brk ? odMm : brk,
 		maxMm: null,
 		notes: ['Standard test pipes (2, 3, 6 and 8 in) have their own rows; not modelled.'],
 		source: sourceOf(AWS_D1_1_QUALIFICATION)

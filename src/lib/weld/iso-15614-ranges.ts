@@ -71,12 +71,15 @@ const limit = (l: IsoLimit, t: number): number | null => {
 	return l.atLeastMm !== undefined ? Math.max(v, l.atLeastMm) : v;
 };
 
-/** min <= max always; a lower limit above the upper one collapses onto the test value. */
+/**
+ * min <= max always; a lower limit above the upper one collapses onto the test value. Not rounded:
+ * rounding 3.175 mm (1/8 in) to 3.18 would leave the coupon's own thickness outside its range.
+ */
 function ordered(min: number, max: number | null, test: number): MmRange {
-	if (max === null) return { min: r2(Math.min(min, test)), max: null };
+	if (max === null) return { min: Math.min(min, test), max: null };
 	const lo = Math.min(min, test, max);
 	const hi = Math.max(max, test, lo);
-	return { min: r2(lo), max: r2(hi) };
+	return { min: lo, max: hi };
 }
 
 /** Butt-weld parent material thickness (2017 Table 6, level 2 column; 2004 Table 5). */

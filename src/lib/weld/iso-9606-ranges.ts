@@ -19,7 +19,6 @@ import { isNum, sourceOf, type FindingSource } from './findings';
 import type { MmRange } from './iso-15614-ranges';
 
 const EPS = 1e-9;
-const r2 = (n: number): number => Math.round(n * 100) / 100;
 const SRC = sourceOf(ISO_9606_1_RANGES);
 
 type Fail = { ok: false; message: string };
@@ -34,12 +33,12 @@ export function welderThicknessIso(
 	if (weld === 'fillet') {
 		const f = THICKNESS_FILLET;
 		return t < f.below - EPS
-			? { ok: true, min: r2(t), max: r2(Math.max(f.maxBelowMm, t)) }
+			? { ok: true, min: t, max: Math.max(f.maxBelowMm, t) }
 			: { ok: true, min: f.minAtOrOverMm, max: null };
 	}
 	const b = THICKNESS_BUTT;
-	if (t < b.thinBelow - EPS) return { ok: true, min: r2(t), max: r2(2 * t) };
-	if (t <= b.midUpTo + EPS) return { ok: true, min: b.midMinMm, max: r2(Math.max(2 * t, 3)) };
+	if (t < b.thinBelow - EPS) return { ok: true, min: t, max: 2 * t };
+	if (t <= b.midUpTo + EPS) return { ok: true, min: b.midMinMm, max: Math.max(2 * t, 3) };
 	return { ok: true, min: b.thickMinMm, max: null };
 }
 
@@ -47,8 +46,8 @@ export function welderThicknessIso(
 export function welderDiameterIso(d: unknown): ({ ok: true } & MmRange) | Fail {
 	if (!isNum(d) || d <= 0 || d > 20_000)
 		return { ok: false, message: 'Give the pipe outside diameter D in mm, above zero.' };
-	if (d <= DIAMETER.smallUpTo + EPS) return { ok: true, min: r2(d), max: r2(2 * d) };
-	return { ok: true, min: r2(Math.max(0.5 * d, DIAMETER.minMm)), max: null };
+	if (d <= DIAMETER.smallUpTo + EPS) return { ok: true, min: d, max: 2 * d };
+	return { ok: true, min: Math.max(0.5 * d, DIAMETER.minMm), max: null };
 }
 
 const isPos = (p: unknown): p is IsoPosition =>
