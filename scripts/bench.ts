@@ -1,10 +1,12 @@
-// npm run bench [-- --no-build --seconds 10 --connections 10 --no-lighthouse --no-js --keep]
+// npm run bench [-- --db sqlite|postgres --no-build --seconds 10 --connections 10 --no-lighthouse --no-js --keep]
 // Builds and starts the production server on a throw-away seeded database, grows one shop from
 // 1k to 100k settings records (timing its list at each size), then loads each route with
 // autocannon beside a bare SvelteKit probe app (scripts/bench/probe/, same Kit, adapter and Node)
 // started in the same run, sends 10,000 mixed requests and reads the server's memory, measures
 // each page's JavaScript in Chromium, times the procedure sheet, audits two pages with
-// Lighthouse, and prints the goals of issue 13 as met / short. Figures also go to bench-results/.
+// Lighthouse, loads the filtered list with 1 and 3 processes behind a round-robin proxy, and
+// prints the goals of issue 13 as met / short. Figures also go to bench-results/. With
+// `--db postgres` the seed is copied into a throw-away PostgreSQL cluster and everything runs there.
 import { spawn, spawnSync } from 'node:child_process';
 import { existsSync, mkdtempSync, rmSync } from 'node:fs';
 import { cpus, loadavg, tmpdir } from 'node:os';
@@ -20,7 +22,9 @@ import { freePort } from './bench/ports';
 import { startProbe } from './bench/probe';
 import { benchPerson, prepareBench } from './bench/prepare';
 import { printFigures, writeFigures, type BenchFigures, type GrowthRow } from './bench/report';
-import { addProcedures, addRecords, addShops, countRecords } from './bench/seed-bulk';
+import { addProcedures, addRecords, addShops } from './bench/seed-bulk';
+import { benchDatabase, type BenchDatabaseKind } from './bench/database';
+import { multiProcess } from './bench/multi';
 
 const arg = (name: string, fallback: number) => {
 	const i = process.argv.indexOf(name);
@@ -29,6 +33,13 @@ const arg = (name: string, fallback: number) => {
 const flag = (name: string) => process.argv.includes(name);
 const SECONDS = arg('--seconds', 10);
 const CONNECTIONS = arg('--connections', 10);
+const DB = (
+	flag('--db') ? process.argv[process.argv.indexOf('--db') + 1] : 'sqlite'
+) as BenchDatabaseKind;
+if (DB !== 'sqlite' && DB !== 'postgres') {
+	console.error('--db takes sqlite (the default) or postgres');
+	process.exit(2);
+}
 /** The sizes the list is timed at; the last one stays for the load runs. */
 const GROWTH = [1_000, 10_000, 100_000];
 const OTHER_SHOPS = ['Bench Shop A', 'Bench Shop B', 'Bench Shop C', 'Bench Shop D'];
@@ -51,7 +62,9 @@ Object.assign(process.env, {
 	SIGNIN_LIMIT_IP_PER_MINUTE: '100000',
 	FORM_LIMIT_IP_PER_MINUTE: '100000',
 	// One address sends every request here: the booth's per-address cap would measure itself.
-	BOOTH_LIMIT_IP_PER_MINUTE: '100000000'
+	BOOTH_LIMIT_IP_PER_MINUTE: '100000000',
+	// adapter-node waits this long for keep-alive connections at SIGTERM (default 30 s).
+	SHUTDOWN_TIMEOUT: '2'
 });
 const origin = `http://localhost:${port}`;
 
@@ -77,17 +90,18 @@ for (const shop of await addShops(db, OTHER_SHOPS)) {
 }
 // The procedure list's goal is set at 10k procedures in the shop.
 await addProcedures(db, larkspur, 10_000, procTemplate, 'WPS');
+await addRecords(db, larkspur, Math.max(0, GROWTH[0]! - templates.length), templates);
+const store = await benchDatabase(DB, db, larkspur, templates);
 const topUp = async (target: number) => {
-	const have = await countRecords(db, fx.shopId);
-	if (have < target) await addRecords(db, larkspur, target - have, templates);
+	const have = await store.countRecords(fx.shopId);
+	if (have < target) await store.addRecords(target - have);
 };
-await topUp(GROWTH[0]!);
 const seedSeconds = (Date.now() - seedStart) / 1000;
 
 // ---- the server ----
 await startCatcher();
 const server = spawn(process.execPath, [`${buildDir}/index.js`], {
-	env: process.env,
+	env: store.env,
 	stdio: ['ignore', 'ignore', 'inherit']
 });
 await waitFor(`${origin}/api/v1/health`);
@@ -112,9 +126,9 @@ for (const size of GROWTH) {
 	await topUp(size);
 	if (size > GROWTH[0]!)
 		console.log(`  grew the shop to ${size} records in ${(Date.now() - t) / 1000} s`);
-	await db.exec('PRAGMA wal_checkpoint(TRUNCATE)');
+	await store.settle();
 	growth.push({
-		records: await countRecords(db, fx.shopId),
+		records: await store.countRecords(fx.shopId),
 		list: await timeSequential(origin + '/records', asEngineer, 100),
 		filtered: await timeSequential(origin + filter, asEngineer, 100)
 	});
@@ -245,13 +259,19 @@ if (!flag('--no-lighthouse')) {
 const rss = memoryMb(server.pid!);
 const data = {
 	shops: Number((await db.get<{ n: number }>('SELECT count(*) AS n FROM shops'))!.n),
-	'settings records': await countRecords(db),
-	'in the measured shop': await countRecords(db, fx.shopId),
+	'settings records': await store.countRecords(),
+	'in the measured shop': await store.countRecords(fx.shopId),
 	procedures: Number((await db.get<{ n: number }>('SELECT count(*) AS n FROM procedures'))!.n),
 	'seconds to seed': Math.round(seededTotal * 10) / 10
 };
 await db.close();
+const serverGone = new Promise((r) => server.once('exit', r));
 server.kill('SIGTERM');
+await serverGone;
+// The filtered list again, now with 1 and with 3 processes on the same database.
+const filterRoute = routes.find((r) => r.id === 'records-filter')!;
+const multi = await multiProcess(store.env, filterRoute, loadOpts);
+await store.close();
 if (!flag('--keep')) rmSync(dataDir, { recursive: true, force: true });
 else notes.push(`Data kept in ${dataDir}`);
 
@@ -260,6 +280,7 @@ const figures: BenchFigures = {
 	load: loadAverage(),
 	machine: { node: process.version, cores: cpus().length, platform: process.platform },
 	settings: { seconds: SECONDS, connections: CONNECTIONS },
+	database: DB,
 	data,
 	probe,
 	routes: results,
@@ -270,6 +291,7 @@ const figures: BenchFigures = {
 	sheets,
 	lighthouse,
 	rss,
+	multi,
 	notes
 };
 printFigures(figures);

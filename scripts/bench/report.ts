@@ -5,6 +5,7 @@ import type { PageJs } from './client-js';
 import type { GoalRow } from './goals';
 import type { PageAudit } from './lighthouse';
 import type { LoadResult } from './load';
+import type { MultiRow } from './multi';
 import type { Timing } from './http';
 import type { SheetFigures } from './sheets';
 
@@ -20,6 +21,8 @@ export interface BenchFigures {
 	load: number[];
 	machine: { node: string; cores: number; platform: string };
 	settings: { seconds: number; connections: number };
+	/** Which database the servers ran on (`--db`). */
+	database: 'sqlite' | 'postgres';
 	data: Record<string, number>;
 	/** The bare SvelteKit probe app: every route's share is of this. */
 	probe: LoadResult;
@@ -36,6 +39,8 @@ export interface BenchFigures {
 	sheets?: SheetFigures;
 	lighthouse?: PageAudit[];
 	rss: { afterMb: number; peakMb: number };
+	/** The filtered list with 1 and with 3 processes behind a round-robin proxy. */
+	multi?: MultiRow[];
 	notes: string[];
 }
 
@@ -49,7 +54,7 @@ export function printFigures(f: BenchFigures): void {
 		`\nBeadline bench ${f.at} — Node ${f.machine.node}, ${f.machine.cores} cores, load average ${f.load.join(' / ')}`
 	);
 	console.log(
-		`Each route: ${f.settings.seconds} s with ${f.settings.connections} connections (autocannon), one server, one run.`
+		`Each route: ${f.settings.seconds} s with ${f.settings.connections} connections (autocannon), one server, one run, on ${f.database === 'postgres' ? 'PostgreSQL (a throw-away cluster)' : 'SQLite'}.`
 	);
 	console.log(
 		`Data: ${Object.entries(f.data)
@@ -148,6 +153,28 @@ export function printFigures(f: BenchFigures): void {
 				[a.requests, 5]
 			]);
 		for (const a of f.lighthouse.filter((x) => x.error)) console.log(`  ${a.name}: ${a.error}`);
+	}
+	if (f.multi?.length) {
+		console.log(
+			`\nFiltered records list behind a round-robin proxy (os.cpus().length = ${f.multi[0]!.cores})`
+		);
+		line([
+			['processes', 10, true],
+			['req/s', 7],
+			['p50 ms', 7],
+			['p99 ms', 7],
+			['errors', 7],
+			['non-2xx', 7]
+		]);
+		for (const m of f.multi)
+			line([
+				[m.processes, 10, true],
+				[m.result.reqPerSec, 7],
+				[m.result.p50Ms, 7],
+				[m.result.p99Ms, 7],
+				[m.result.errors, 7],
+				[m.result.non2xx, 7]
+			]);
 	}
 	console.log(`\nServer RSS after the run: ${f.rss.afterMb} MB (peak ${f.rss.peakMb} MB)`);
 	for (const n of f.notes) console.log(`Note: ${n}`);
