@@ -56,7 +56,11 @@ test('50 parallel approvals of one revision: exactly one signs', async () => {
 
 test('50 parallel one-tap logs by one welder: one continuity entry', async () => {
 	const cookie = await cookieOf(welder);
-	const since = new Date(Date.now() - 1000).toISOString().replace('T', ' ').slice(0, 19);
+	// By id, not by time: a timestamp window would also count the audit row of the test before.
+	const since = await withE2eDatabase(
+		async (db) =>
+			(await db.get<{ id: number | null }>('SELECT max(id) AS id FROM audit_events'))?.id ?? 0
+	);
 	const answers = await Promise.all(
 		Array.from({ length: PARALLEL }, () =>
 			postForm('/welders/me?/tap', cookie, { process: 'GMAW' })
@@ -80,7 +84,7 @@ test('50 parallel one-tap logs by one welder: one continuity entry', async () =>
 			[w!.id, day!.d]
 		);
 		const a = await db.get<{ n: number }>(
-			"SELECT count(*) AS n FROM audit_events WHERE action = 'continuity.recorded' AND at >= ? AND actor_id = (SELECT id FROM users WHERE email = ?)",
+			"SELECT count(*) AS n FROM audit_events WHERE action = 'continuity.recorded' AND id > ? AND actor_id = (SELECT id FROM users WHERE email = ?)",
 			[since, welder.email]
 		);
 		return { entries: n!.n, audits: a!.n };
@@ -106,7 +110,11 @@ test('50 parallel booth taps on one posted sheet: one continuity entry', async (
 		)
 	);
 	test.skip(!link, 'No live booth link to an approved GTAW or GMAW revision in the demo data');
-	const since = new Date(Date.now() - 1000).toISOString().replace('T', ' ').slice(0, 19);
+	// By id, not by time: a timestamp window would also count the audit row of the test before.
+	const since = await withE2eDatabase(
+		async (db) =>
+			(await db.get<{ id: number | null }>('SELECT max(id) AS id FROM audit_events'))?.id ?? 0
+	);
 	const answers = await Promise.all(
 		Array.from({ length: PARALLEL }, () => postForm(`/b/${link!.token}?/used`, cookie, {}))
 	);
@@ -132,7 +140,7 @@ test('50 parallel booth taps on one posted sheet: one continuity entry', async (
 			[w!.id, link!.process, day!.d]
 		);
 		const a = await db.get<{ n: number }>(
-			"SELECT count(*) AS n FROM audit_events WHERE action = 'continuity.recorded' AND at >= ? AND actor_id = (SELECT id FROM users WHERE email = ?)",
+			"SELECT count(*) AS n FROM audit_events WHERE action = 'continuity.recorded' AND id > ? AND actor_id = (SELECT id FROM users WHERE email = ?)",
 			[since, welder.email]
 		);
 		return { entries: n!.n, audits: a!.n };
