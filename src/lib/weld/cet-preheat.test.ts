@@ -16,7 +16,7 @@ describe('CET (EN 1011-2 C.3)', () => {
 		[{ C: 0.18, Mn: 1.4 }, 0.32], // 0.18 + 1.4/10
 		[{ C: 0.15, Mn: 1.5, Cr: 0.1, Cu: 0.2, Ni: 0.3 }, 0.3225], // 0.15 + 0.15 + 0.015 + 0.0075
 		[{ C: 0.2, Mn: 1.2, Mo: 0.25, Cr: 1.0 }, 0.395], // 0.2 + 0.145 + 0.05
-		[{ C: 0.1 }, 0.1]
+		[{ C: 0.1 }, 0.1] // carbon alone: CET = C (EN 1011-2 C.3 formula)
 	])('%j -> %s', (chem, cet) => {
 		expect(carbonEquivalentCET(chem)).toBeCloseTo(cet, 6);
 	});
@@ -28,6 +28,7 @@ describe('CET (EN 1011-2 C.3)', () => {
 
 describe('preheat Tp (EN 1011-2 C.3)', () => {
 	it.each([
+		// Each Tp below: hand-computed from the EN 1011-2:2001 C.3 formula above (no published worked example found).
 		[{ C: 0.18, Mn: 1.4 }, 30, 5, 1.5, 92.5], // S355-like: 0.32, 30 mm, HD 5, 1.5 kJ/mm
 		[{ C: 0.15, Mn: 1.5, Cr: 0.1, Cu: 0.2, Ni: 0.3 }, 50, 10, 1.0, 163.3],
 		[{ C: 0.2, Mn: 1.2, Mo: 0.25, Cr: 1.0 }, 25, 5, 2.0, 132.2],
@@ -65,13 +66,14 @@ describe('preheat Tp (EN 1011-2 C.3)', () => {
 describe('method A inputs (EN 1011-2 C.2)', () => {
 	it.each([
 		[20, 'A'], // > 15 ml/100 g (EN 1011-2 Table C.2, gowelding.com reprint)
-		[12, 'B'],
-		[10, 'C'],
-		[5, 'D'],
-		[4, 'D'],
-		[2, 'E']
+		[12, 'B'], // > 10 to 15 (EN 1011-2 Table C.2, gowelding.com reprint)
+		[10, 'C'], // > 5 to 10 (same table)
+		[5, 'D'], // > 3 to 5 (same table)
+		[4, 'D'], // > 3 to 5 (same table)
+		[2, 'E'] // <= 3 (same table)
 	])('HD %s -> scale %s', (hd, s) => expect(hydrogenScale(hd)).toBe(s));
 	it.each([
+		// Combined thickness: the sum of the heat paths (EN 1011-2 Annex C) // from memory
 		[[20, 20], 40], // butt weld of two 20 mm plates
 		[[10, 10, 10], 30], // T fillet: three paths
 		[[25, 12], 37]

@@ -1,5 +1,6 @@
 // The weld core's import graph, type imports included: eslint's import-x/no-cycle guards value
-// imports only (it skips `import type`), so this test guards the rest.
+// imports only (it skips `import type`), so this test guards the rest. It checks no welding
+// values, so no source applies.
 import { readdirSync, readFileSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
