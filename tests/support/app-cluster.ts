@@ -6,7 +6,6 @@
 import { spawn, type ChildProcess } from 'node:child_process';
 import { randomBytes } from 'node:crypto';
 import { mkdtempSync, readdirSync, readFileSync, rmSync } from 'node:fs';
-import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { simpleParser } from 'mailparser';
@@ -15,17 +14,8 @@ import { startPostgres } from '../../scripts/lib/postgres';
 import { startS3Fake } from '../../scripts/lib/s3-fake';
 import { startMailCatcher } from '../../src/lib/server/mail/catcher';
 import { openAnyDatabase, type AnyDatabase } from './any-database';
-import { prepareData } from './own-server';
+import { freePort, healthy, prepareData } from './own-server';
 import { startProxy, type Backend, type Proxy } from './round-robin-proxy';
-
-export function freePort(): Promise<number> {
-	return new Promise((resolve) => {
-		const s = createServer().listen(0, '127.0.0.1', () => {
-			const { port } = s.address() as { port: number };
-			s.close(() => resolve(port));
-		});
-	});
-}
 
 export interface AppProcess {
 	name: string;
@@ -46,19 +36,6 @@ export interface Cluster {
 	mail(): Promise<{ to: string; subject: string }[]>;
 	kill(app: AppProcess): Promise<void>;
 	dispose(): Promise<void>;
-}
-
-async function healthy(origin: string, timeoutMs: number): Promise<void> {
-	const until = Date.now() + timeoutMs;
-	while (Date.now() < until) {
-		try {
-			if ((await fetch(`${origin}/api/v1/health`)).ok) return;
-		} catch {
-			// not listening yet
-		}
-		await new Promise((r) => setTimeout(r, 100));
-	}
-	throw new Error(`${origin} did not come up in ${timeoutMs} ms`);
 }
 
 /**

@@ -8,7 +8,7 @@ import { join } from 'node:path';
 import type { SMTPServer } from 'smtp-server';
 import { startMailCatcher } from '../../src/lib/server/mail/catcher';
 
-function freePort(): Promise<number> {
+export function freePort(): Promise<number> {
 	return new Promise((resolve) => {
 		const s = createServer().listen(0, '127.0.0.1', () => {
 			const { port } = s.address() as { port: number };
@@ -29,7 +29,7 @@ export interface OwnServer {
 	dispose(): Promise<void>;
 }
 
-async function healthy(origin: string, timeoutMs: number): Promise<void> {
+export async function healthy(origin: string, timeoutMs: number): Promise<void> {
 	const until = Date.now() + timeoutMs;
 	while (Date.now() < until) {
 		try {
