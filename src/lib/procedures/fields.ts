@@ -1,4 +1,7 @@
-// Where each editor field lives in the variables document, and what kind of quantity it holds.
+// Where each editor field lives in the variables document, and what kind of quantity it holds:
+// read from the one description of the variables ($lib/schemas/variables), listed here by the
+// editor's field names so the form's types know them.
+import { unitOf, VARIABLES, type Variable, type VariableId } from '$lib/schemas/variables';
 import type { QuantityKind } from './quantities';
 
 export interface QuantitySpec {
@@ -8,55 +11,31 @@ export interface QuantitySpec {
 	key: string;
 }
 
+function wps(id: VariableId): QuantitySpec {
+	const v: Variable = VARIABLES[id];
+	if (!v.wps) throw new Error(`${id} is not a WPS variable`);
+	return { kind: unitOf(id), label: v.wps.label ?? v.label, group: v.wps.group, key: v.wps.key };
+}
+
 /** Variables held as a range: the form has `<name>Min` and `<name>Max`. */
 export const RANGE_FIELDS = {
-	thickness: {
-		kind: 'thickness',
-		label: 'Base metal thickness',
-		group: 'baseMetals',
-		key: 'thicknessMm'
-	},
-	fillerDiameter: {
-		kind: 'diameter',
-		label: 'Filler diameter',
-		group: 'fillerMetals',
-		key: 'diameterMm'
-	},
-	amps: { kind: 'amps', label: 'Amperage', group: 'electrical', key: 'amps' },
-	volts: { kind: 'volts', label: 'Voltage', group: 'electrical', key: 'volts' },
-	wireFeed: { kind: 'wire', label: 'Wire feed speed', group: 'electrical', key: 'wireFeedMmPerS' },
-	tungstenDiameter: {
-		kind: 'diameter',
-		label: 'Tungsten diameter',
-		group: 'electrical',
-		key: 'tungstenDiameterMm'
-	},
-	gasFlow: { kind: 'flow', label: 'Shielding gas flow', group: 'gas', key: 'flowLPerMin' },
-	travelSpeed: {
-		kind: 'travel',
-		label: 'Travel speed',
-		group: 'technique',
-		key: 'travelSpeedMmPerS'
-	},
-	pwhtTemp: { kind: 'temperature', label: 'PWHT temperature', group: 'pwht', key: 'temperatureC' }
-} as const satisfies Record<string, QuantitySpec>;
+	thickness: wps('thickness'),
+	fillerDiameter: wps('fillerDiameter'),
+	amps: wps('amps'),
+	volts: wps('volts'),
+	wireFeed: wps('wireFeed'),
+	tungstenDiameter: wps('tungstenDiameter'),
+	gasFlow: wps('gasFlow'),
+	travelSpeed: wps('travelSpeed'),
+	pwhtTemp: wps('pwhtTemp')
+} satisfies Record<string, QuantitySpec>;
 
 /** Variables held as one limit. */
 export const SINGLE_FIELDS = {
-	preheatMin: { kind: 'temperature', label: 'Minimum preheat', group: 'preheat', key: 'minC' },
-	interpassMax: {
-		kind: 'temperature',
-		label: 'Maximum interpass',
-		group: 'preheat',
-		key: 'interpassMaxC'
-	},
-	heatInputMax: {
-		kind: 'heatInput',
-		label: 'Maximum heat input',
-		group: 'electrical',
-		key: 'heatInputMaxJPerMm'
-	}
-} as const satisfies Record<string, QuantitySpec>;
+	preheatMin: wps('preheat'),
+	interpassMax: wps('interpass'),
+	heatInputMax: wps('heatInput')
+} satisfies Record<string, QuantitySpec>;
 
 export type RangeField = keyof typeof RANGE_FIELDS;
 export type SingleField = keyof typeof SINGLE_FIELDS;

@@ -4,6 +4,7 @@ import { z } from 'zod';
 import { CURRENT_TYPES, JOINT_TYPES, POSITIONS, PROCESSES, TRANSFERS } from '$lib/records/options';
 import { ENERGY_UNITS, STRENGTH_UNITS, TEST_KINDS, TEST_RESULTS } from '$lib/procedures/options';
 import { readQuantity, type QuantityKind } from '$lib/procedures/quantities';
+import { unitOf } from './variables';
 
 const finite = z.number().finite().nullable();
 const str = (max: number) => z.string().max(max);
@@ -67,20 +68,20 @@ const number = z
 	.default('')
 	.refine((s) => s === '' || Number.isFinite(Number(s.replace(',', ''))), 'Enter a number.');
 
-/** The form's quantity fields and what each holds. */
+/** The form's quantity fields; what each holds comes from the description of the variables. */
 export const PQR_QUANTITIES = {
-	amps: 'amps',
-	volts: 'volts',
-	travelSpeed: 'travel',
-	wireFeed: 'wire',
-	fillerDiameter: 'diameter',
-	tungstenDiameter: 'diameter',
-	gasFlow: 'flow',
-	couponThickness: 'thickness',
-	depositedThickness: 'thickness',
-	preheat: 'temperature',
-	interpass: 'temperature'
-} as const satisfies Record<string, QuantityKind>;
+	amps: unitOf('amps'),
+	volts: unitOf('volts'),
+	travelSpeed: unitOf('travelSpeed'),
+	wireFeed: unitOf('wireFeed'),
+	fillerDiameter: unitOf('fillerDiameter'),
+	tungstenDiameter: unitOf('tungstenDiameter'),
+	gasFlow: unitOf('gasFlow'),
+	couponThickness: unitOf('couponThickness'),
+	depositedThickness: unitOf('depositedThickness'),
+	preheat: unitOf('preheat'),
+	interpass: unitOf('interpass')
+} satisfies Record<string, QuantityKind>;
 
 const ISO_DATE = /^\d{4}-\d{2}-\d{2}$/;
 

@@ -1,0 +1,45 @@
+// The PQR form's layout: the actual values used on the coupon, one value each. Data only;
+// PqrFormView renders it with the field components.
+import { processEntries, type Entry, type Section } from '$lib/components/fields/layout';
+import type { VariableId } from '$lib/schemas/variables';
+
+const value = (id: VariableId, more: Partial<Entry> = {}): Entry => ({ name: id, of: id, ...more });
+
+export const PQR_SECTIONS: readonly Section[] = [
+	{
+		aria: 'PQR',
+		entries: [
+			{ name: 'number', label: 'Number' },
+			{ name: 'title', label: 'Title' },
+			{ name: 'weldedOn', label: 'Date welded', attrs: { type: 'date' } },
+			{ name: 'welder', label: 'Welder' },
+			{ name: 'lab', label: 'Testing lab' }
+		]
+	},
+	{
+		heading: 'Actual values used on the coupon',
+		aria: 'Actual values',
+		grid: 'sm:grid-cols-2 lg:grid-cols-3',
+		entries: [
+			...processEntries(),
+			value('fillerClass'),
+			value('tungstenClass', { label: 'Tungsten', gated: true }),
+			value('gasName'),
+			value('baseMetalSpec', { placeholder: 'A36' }),
+			{ name: 'testPosition', of: 'position', label: 'Test position', empty: '—' },
+			value('jointType', { empty: '—' }),
+			{ name: 'pwht', label: 'PWHT', placeholder: 'None' },
+			value('amps'),
+			value('volts'),
+			value('travelSpeed'),
+			value('wireFeed'),
+			value('fillerDiameter'),
+			value('tungstenDiameter'),
+			value('gasFlow'),
+			value('couponThickness', { hint: 'Sets the thickness range qualified (QW-451.1).' }),
+			value('depositedThickness'),
+			value('preheat'),
+			value('interpass')
+		]
+	}
+];
