@@ -24,8 +24,9 @@ export interface Entry {
 	unit?: UnitKind;
 	hint?: string | Record<UnitSystem, string>;
 	placeholder?: string;
-	/** Choices where the form's differ from the variable's (or it has none). */
-	choices?: readonly Choice[];
+	/** Choices where the form's differ from the variable's (or it has none); a function reads
+	 * the form's values (the test positions of the coupon chosen). */
+	choices?: readonly Choice[] | ((values: Values) => readonly Choice[]);
 	/** A choice's "not given" label; omit for a required choice. */
 	empty?: string;
 	/** Hide where the variable does not apply to the chosen process. */
@@ -48,6 +49,8 @@ export interface Section {
 	aria?: string;
 	/** The heading's size classes; default `text-lg`. */
 	headingClass?: string;
+	/** Drawn as a panel of its own (default) or as a plain row of a form that is one panel. */
+	panel?: boolean;
 	/** The grid's classes (columns); default two columns from small screens up. */
 	grid?: string;
 	entries: readonly Entry[];
