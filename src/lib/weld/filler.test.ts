@@ -1,13 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import {
-	checkFillerClassification,
-	checkFillerVsBaseMetal,
-	fillerSuits,
-	parseFiller,
-	wrongFamily,
-	type Filler
-} from './filler';
+import { fillerSuits, parseFiller, wrongFamily, type Filler } from './filler';
+import { checkFillerClassification, checkFillerVsBaseMetal } from './filler-checks';
 
 const get = (text: string): Filler => {
 	const r = parseFiller(text);

@@ -4,6 +4,7 @@ export * from './findings';
 export * from './check-catalogue';
 export * from './settings';
 export * from './filler';
+export * from './filler-checks';
 export * from './tungsten';
 export * from './base-metal';
 export * from './amperage';

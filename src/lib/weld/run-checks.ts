@@ -4,7 +4,8 @@ import { checkAmpsVsFiller, checkAmpsVsThickness, checkWfsVsAmps } from './amper
 import { baseMetalFromFamily, checkBaseMetal, parseBaseMetal, type BaseMetal } from './base-metal';
 import { CHECK_IDS } from './check-catalogue';
 import type { CheckContext } from './context';
-import { checkFillerClassification, checkFillerVsBaseMetal, parseFiller } from './filler';
+import { checkFillerClassification, checkFillerVsBaseMetal } from './filler-checks';
+import { parseFiller } from './filler';
 import { isNum, sourceOf, type Finding } from './findings';
 import { checkGasFlow, checkGasForProcess, parseGas } from './gas-flow';
 import { checkHeatInput, heatInput, type HeatInput } from './heat-input';
