@@ -24,6 +24,10 @@ test('the manifest and the service worker register with no console errors; the a
 	const errors: string[] = [];
 	page.on('console', (m) => m.type() === 'error' && errors.push(m.text()));
 	page.on('pageerror', (e) => errors.push(e.message));
+	// The worker's own console too: an error while it installs or serves counts.
+	context.on('serviceworker', (w) =>
+		w.on('console', (m) => m.type() === 'error' && errors.push(`[worker] ${m.text()}`))
+	);
 	await signIn(page, welder);
 	await controlled(page);
 	const manifest = await page.request.get('/manifest.webmanifest');
