@@ -51,7 +51,13 @@ test('the manifest and the service worker register with no console errors; the a
 	const app = (await cdp.send('Page.getAppManifest')) as { errors: { message: string }[] };
 	expect(app.errors).toEqual([]);
 	await page.goto('/booth');
-	await page.goto(`/b/${await boothTokenOn(server, 'WPS-002', 1)}`);
+	// The booth view stays JavaScript-free with the worker installed and serving it.
+	const scripts: string[] = [];
+	page.on('request', (r) => r.resourceType() === 'script' && scripts.push(r.url()));
+	const booth = await page.goto(`/b/${await boothTokenOn(server, 'WPS-002', 1)}`);
+	expect(booth?.fromServiceWorker()).toBe(true);
+	expect(await page.locator('script').count()).toBe(0);
+	expect(scripts).toEqual([]);
 	expect(errors).toEqual([]);
 	// One shell, this deployment's: an older one is deleted when its successor takes over.
 	const shells = await page.evaluate(async () =>
