@@ -54,7 +54,8 @@ test('a new deployment replaces the cached shell on the next visit, offers a rel
 	page.on('pageerror', (e) => errors.push(e.message));
 	await signIn(page, welder);
 	await controlled(page);
-	const old = proxy.built;
+	// What the phone installs first: the build, or the last "deployment" of a repeated run.
+	const old = proxy.version;
 	await expect.poll(() => workerVersion(page)).toBe(old);
 	expect(await cacheNames(page, 'shell-')).toEqual([`shell-${old}`]);
 	// A first install is no update: nothing to reload.
