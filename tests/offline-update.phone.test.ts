@@ -122,3 +122,23 @@ test('a new deployment replaces the cached shell on the next visit, offers a rel
 	expect(errors).toEqual([]);
 	await context.close();
 });
+
+test('a page kept open across a deployment offers the reload when the phone comes back to it', async ({
+	browser
+}) => {
+	const { context, page } = await phone(browser, server);
+	await signIn(page, welder);
+	await controlled(page);
+	const old = proxy.version;
+	await expect.poll(() => workerVersion(page)).toBe(old);
+	const opened = await page.evaluate(() => performance.timeOrigin);
+
+	const next = proxy.redeploy();
+	// Back from the background (the app switcher, a locked screen): no page loads, and the page
+	// itself asks the browser to look for a new worker.
+	await page.evaluate(() => document.dispatchEvent(new Event('visibilitychange')));
+	await expect(page.getByTestId('app-updated')).toBeVisible({ timeout: 20_000 });
+	await expect.poll(() => cacheNames(page, 'shell-')).toEqual([`shell-${next}`]);
+	expect(await page.evaluate(() => performance.timeOrigin)).toBe(opened);
+	await context.close();
+});
