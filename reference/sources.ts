@@ -55,10 +55,11 @@ export const ASME_IX_QW_452_3: Source = {
 };
 
 export const ASME_IX_QW_403_10: Source = {
-	label: 'ASME BPVC Section IX QW-403.10 (GMAW short-circuit)',
-	edition: 'BPVC IX, recalled',
-	kind: 'from memory',
-	note: 'Coupon under 1/2 in welded short-circuit: maximum qualified 1.1T. Verify in the code.'
+	label: 'ASME BPVC Section IX QW-403.10 and QW-404.32 (GMAW short-circuit)',
+	edition:
+		'as stated in API RP 577 (Welding Processes, Inspection, and Metallurgy) 11.3, "Lack of fusion with GMAW-S", read from a public reproduction of its text',
+	kind: 'published',
+	note: "Coupon under 1/2 in (12.7 mm) welded short-circuit: base metal qualified up to 1.1 times the coupon thickness (QW-403.10), deposit up to 1.1 times the deposit (QW-404.32). Beadline uses the code's 13 mm metric column."
 };
 
 export const ASME_IX_QW_422: Source = {
@@ -252,11 +253,19 @@ export const PROCEDURE_RANGES: Source = {
 // hand: their rows are recalled and marked so, except where a public page quoted the clause.
 
 export const ISO_15614_1_RANGES: Source = {
-	label: 'ISO 15614-1 clause 8 (range of qualification)',
+	label: 'ISO 15614-1 clause 8 (range of qualification), rows not read',
 	edition:
-		'ISO 15614-1:2017+A1:2019, rows recalled (same rows as the 2004 edition, Tables 5 and 6)',
+		'ISO 15614-1:2017+A1:2019, recalled: the t <= 3 mm row of Table 7 (lost in the copy read) and the sub-group 1.4 rule',
 	kind: 'from memory',
-	note: 'Level 2 rows. Verify every range in the standard before relying on it.'
+	note: 'Level 2 rows. Verify these in the standard before relying on them.'
+};
+
+export const ISO_15614_1_2017: Source = {
+	label: 'ISO 15614-1:2017+A1:2019 clause 8 (range of qualification), level 2',
+	edition:
+		'BS EN ISO 15614-1:2017+A1:2019 (identical to ISO 15614-1:2017 with Amd 1:2019), read from a text copy of the standard: 8.3.1 Table 5, 8.3.2 Table 7, 8.3.3 Table 9, 8.4.1-8.4.11, 8.5.2, Annex A Tables A.1 and A.2',
+	kind: 'published',
+	note: 'Level 2 columns. Table 7: 3 < t <= 12 single run 0.5t (3 min) to 1.3t, multi-run 3 to 2t; 12 < t <= 40 single run 0.5t to 1.1t; 12 < t <= 100 multi-run 0.5t to 2t; 40 < t <= 100 no single-run row; over 100 mm multi-run 50 to 2t. Table 9: D qualifies 0.5D and over. 8.4.8: preheat may drop 50 degC; 8.4.9: interpass may rise 50 degC (groups 8, 10, 41-48: the highest reached).'
 };
 
 export const ISO_15614_1_LEVELS: Source = {

@@ -83,9 +83,7 @@ export function pqrThicknessRange(
 	const shortCircuit = transfer === 'short-circuit' && lengthToMm(T, unit) < 13 - EPS;
 	if (shortCircuit) {
 		max = 1.1 * T;
-		notes.push(
-			'GMAW short-circuit, coupon under 1/2 in (13 mm): maximum 1.1T (QW-403.10, from memory; verify).'
-		);
+		notes.push('GMAW short-circuit, coupon under 1/2 in (13 mm): maximum 1.1T (QW-403.10).');
 	}
 	if (min > max) min = max;
 	const result: PqrRanges = {
@@ -107,9 +105,7 @@ export function pqrThicknessRange(
 			dmax = 'fixed' in col ? col.fixed[du] : mmToLength(lengthToMm(col.timesT * T, unit), du);
 		if (shortCircuit && lengthToMm(t, du) < 13 - EPS) {
 			dmax = 1.1 * t;
-			notes.push(
-				'GMAW short-circuit, deposit under 1/2 in (13 mm): maximum 1.1t (QW-404.32, from memory; verify).'
-			);
+			notes.push('GMAW short-circuit, deposit under 1/2 in (13 mm): maximum 1.1t (QW-404.32).');
 		}
 		result.depositedMax = { value: tidy(dmax, du), unit: du };
 	}
