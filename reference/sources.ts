@@ -98,6 +98,21 @@ export const ASME_IX_QW_442_MEMORY: Source = {
 	kind: 'from memory'
 };
 
+export const ISO_15614_1_TABLE_A1: Source = {
+	label: 'ISO 15614-1:2017 Annex A Table A.1 (level 1 F-Numbers of covered electrodes)',
+	edition:
+		'BS EN ISO 15614-1:2017+A1:2019, read from a text copy of the standard; column B (classification by tensile strength) uses the AWS A5.1 digits',
+	kind: 'published',
+	note: 'F-1: EXX20, EXX24, EXX27, EXX28; F-2: EXX12, EXX13, EXX14, EXX19; F-3: EXX10, EXX11; F-4: EXX15, EXX16, EXX18, EXX48. Level 1 is the ASME IX based level, so these are the QW-432 groups. EXX22 is not listed there.'
+};
+
+export const ISO_15614_1_TABLE_A2: Source = {
+	label: 'ISO 15614-1:2017 Annex A Table A.2 (level 1 A-Numbers by weld metal analysis)',
+	edition: 'BS EN ISO 15614-1:2017+A1:2019, read from a text copy of the standard',
+	kind: 'published',
+	note: 'The twelve QW-442 analysis ranges: A-1 mild steel (C 0.20, Cr 0.20, Mo 0.30, Ni 0.50, Mn 1.60, Si 1.00 max); A-3 Cr 0.40-2.00, Mo 0.40-0.65; A-8 Cr 14.50-30.00, Ni 7.50-15.00, Mo 4.00 max. Applied here to the nominal composition of the classification; the deposit analysis decides.'
+};
+
 export const AWS_A5_CLASSIFICATION: Source = {
 	label: 'AWS A5 filler metal classification system (A5.1, A5.9, A5.10, A5.18, A5.20, A5.28)',
 	edition: 'A5.18/A5.18M:2005 and the other A5 specifications of that period',
@@ -305,8 +320,9 @@ export const ISO_9606_1_VALIDITY: Source = {
 export const ISO_6947: Source = {
 	label: 'ISO 6947 welding positions (PA to PH, PJ, H-L045, J-L045)',
 	edition:
-		'ISO 6947:2019 (and 2011), names recalled; the ASME/AWS equivalents are the usual correspondence, not a table of either code',
-	kind: 'from memory'
+		'ISO 6947:2011/2019. PA-PG (main positions) read from a public reprint of the ISO 6947 text and a welding course page (corso-saldatura.it), with PH (pipe, welding upwards); PJ, H-L045, J-L045 recalled. ASME/AWS equivalents: 1G/1F PA, 2F PB, 2G PC, 4F PD, 4G PE read in a public position chart that cites BS EN ISO 15614-1, ASME IX and AWS D1.1; 3G, 3F, 5G, 5F, 6G recalled',
+	kind: 'from memory',
+	note: 'Kept as from memory because the table mixes read and recalled rows; ISO 6947 Annex B (comparison of designations) was not read.'
 };
 
 export const EN_1011_2_CET: Source = {
