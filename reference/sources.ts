@@ -297,10 +297,19 @@ export const ISO_TR_15608: Source = {
 };
 
 export const ISO_9606_1_RANGES: Source = {
-	label: 'ISO 9606-1 clause 5 (range of qualification)',
-	edition: 'ISO 9606-1:2012 (Tables 2 to 12), rows recalled',
+	label: 'ISO 9606-1 clause 5 (range of qualification), readings not in the text',
+	edition:
+		'ISO 9606-1:2012, recalled: that H-L045 and J-L045 also qualify the fixed-pipe position of their direction (PH, PJ), which Table 9 has no column for',
 	kind: 'from memory',
-	note: 'Verify every range in the standard before relying on it.'
+	note: 'Verify in the standard before relying on it.'
+};
+
+export const ISO_9606_1_2012: Source = {
+	label: 'ISO 9606-1:2012 clause 5 (essential variables and range of qualification)',
+	edition:
+		'BS EN ISO 9606-1:2017 (identical to ISO 9606-1:2012 with Cor 1:2012), read from a text copy of the standard: 5.2, 5.3, 5.4, 5.5 Tables 2 and 3, 5.7 Tables 6, 7 and 8, 5.8 Tables 9 and 10',
+	kind: 'published',
+	note: 'Table 6 (deposited thickness, butt): s < 3: s to 3 or 2s, whichever is greater; 3 <= s < 12: 3 to 2s; s >= 12: 3 and over. Table 7: D <= 25: D to 2D; D > 25: 0.5D, 25 mm min. Table 8 (fillet): t < 3: t to 2t or 3, whichever is greater; t >= 3: 3 and over. 5.5.2: any filler group also qualifies parent groups 1 to 11. 5.2: 135/138 and 121/125 cover each other; 141, 143, 145 qualify 141, 142, 143, 145; 142 only itself. The comparison signs of 5.3 were not legible in the copy.'
 };
 
 export const ISO_9606_1_FILLET_SUPPLEMENT: Source = {

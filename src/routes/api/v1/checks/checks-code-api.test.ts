@@ -107,7 +107,7 @@ describe('POST /api/v1/checks/welder-positions with a code', () => {
 		).json();
 		expect(b).toEqual(a);
 	});
-	it('ISO 9606-1: PF butt qualifies PA and PF (Table 12) // from memory', async () => {
+	it('ISO 9606-1: PF butt qualifies PA and PF (ISO 9606-1:2012 Table 9)', async () => {
 		const r = await (
 			await call(welderPositions, { testPositions: ['PF'], code: 'ISO 9606-1' })
 		).json();
