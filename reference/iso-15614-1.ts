@@ -1,6 +1,6 @@
-// ISO 15614-1 ranges of qualification (clause 8) as data. Rows read from the 2017+A1:2019 text
-// are `published`; the rest are recalled and marked so (see each row's source).
-import { ISO_15614_1_2017, ISO_15614_1_RANGES, ISO_TR_15608 } from './sources';
+// ISO 15614-1 ranges of qualification (clause 8) as data, read from the 2017 and 2017+A1:2019
+// texts (see the source); what they do not settle is recalled and marked so.
+import { ISO_15614_1_2017, ISO_TR_15608 } from './sources';
 import type { Source } from './types';
 
 /** A limit in mm: a multiple of the test thickness, a fixed length, or the larger of both. */
@@ -15,20 +15,20 @@ export interface IsoThicknessRow {
 	source: Source;
 }
 
-const S = ISO_15614_1_RANGES;
 const P = ISO_15614_1_2017;
 
 /**
- * Butt welds, parent material thickness (2017 Table 7, level 2 columns). The t <= 3 mm row was
- * lost in the copy read and stays recalled; 2017 gives no single-run row over 40 mm (2004 did).
+ * Butt welds, parent material thickness (2017 Table 7, level 2 columns). The t <= 3 mm row prints
+ * one cell, 0.5t to 2t, across the level columns (2004 had 0.7t to 1.3t single run, 0.7t to 2t
+ * multi-run); 2017 gives no single-run row over 40 mm (2004 did, to 100 mm).
  */
 export const ISO_15614_1_THICKNESS: readonly IsoThicknessRow[] = [
 	{
 		over: 0,
 		upTo: 3,
-		singleRun: { min: { timesT: 0.7 }, max: { timesT: 1.3 } },
-		multiRun: { min: { timesT: 0.7 }, max: { timesT: 2 } },
-		source: S
+		singleRun: { min: { timesT: 0.5 }, max: { timesT: 2 } },
+		multiRun: { min: { timesT: 0.5 }, max: { timesT: 2 } },
+		source: P
 	},
 	{
 		over: 3,

@@ -268,9 +268,9 @@ export const PROCEDURE_RANGES: Source = {
 // hand: their rows are recalled and marked so, except where a public page quoted the clause.
 
 export const ISO_15614_1_RANGES: Source = {
-	label: 'ISO 15614-1 clause 8 (range of qualification), rows not read',
+	label: 'ISO 15614-1 clause 8 (range of qualification), readings not in the text',
 	edition:
-		'ISO 15614-1:2017+A1:2019, recalled: the t <= 3 mm row of Table 7 (lost in the copy read) and the sub-group 1.4 rule',
+		'ISO 15614-1:2017+A1:2019, recalled: that sub-group 1.4 (weather-resistant steels) qualifies itself only; Table 5 does not name sub-groups of group 1',
 	kind: 'from memory',
 	note: 'Level 2 rows. Verify these in the standard before relying on them.'
 };
@@ -278,9 +278,9 @@ export const ISO_15614_1_RANGES: Source = {
 export const ISO_15614_1_2017: Source = {
 	label: 'ISO 15614-1:2017+A1:2019 clause 8 (range of qualification), level 2',
 	edition:
-		'BS EN ISO 15614-1:2017+A1:2019 (identical to ISO 15614-1:2017 with Amd 1:2019), read from a text copy of the standard: 8.3.1 Table 5, 8.3.2 Table 7, 8.3.3 Table 9, 8.4.1-8.4.11, 8.5.2, Annex A Tables A.1 and A.2',
+		'BS EN ISO 15614-1:2017+A1:2019 (identical to ISO 15614-1:2017 with Amd 1:2019) and UNI EN ISO 15614-1:2017, read from text copies of the standard: 8.3.1 Table 5, 8.3.2 Table 7, 8.3.3 Table 9, 8.4.1-8.4.11, 8.5.2, Annex A Tables A.1 and A.2',
 	kind: 'published',
-	note: 'Level 2 columns. Table 7: 3 < t <= 12 single run 0.5t (3 min) to 1.3t, multi-run 3 to 2t; 12 < t <= 40 single run 0.5t to 1.1t; 12 < t <= 100 multi-run 0.5t to 2t; 40 < t <= 100 no single-run row; over 100 mm multi-run 50 to 2t. Table 9: D qualifies 0.5D and over. 8.4.8: preheat may drop 50 degC; 8.4.9: interpass may rise 50 degC (groups 8, 10, 41-48: the highest reached).'
+	note: 'Level 2 columns. Table 7: t <= 3 one cell across the levels, 0.5t to 2t; 3 < t <= 12 single run 0.5t (3 min) to 1.3t, multi-run 3 to 2t; 12 < t <= 40 single run 0.5t to 1.1t; 12 < t <= 100 multi-run 0.5t to 2t; 40 < t <= 100 no single-run row; over 100 mm multi-run 50 to 2t. Table 9: D qualifies 0.5D and over. 8.4.8: preheat may drop 50 degC; 8.4.9: interpass may rise 50 degC (groups 8, 10, 41-48: the highest reached).'
 };
 
 export const ISO_15614_1_LEVELS: Source = {

@@ -8,19 +8,19 @@ import {
 import { isoProcedureRanges } from './iso-15614-procedure';
 
 // Worked cases computed by hand from ISO 15614-1:2017+A1:2019 clause 8, level 2 (BS EN ISO
-// 15614-1:2017+A1:2019, read from a text copy of the standard: reference/sources.ts
-// ISO_15614_1_2017). The t <= 3 mm row of Table 7 was not legible there and stays from memory.
+// 15614-1:2017+A1:2019 and UNI EN ISO 15614-1:2017, read from text copies of the standard:
+// reference/sources.ts ISO_15614_1_2017).
 const item = (c: object, variable: string) =>
 	isoProcedureRanges(c).items.find((i) => i.variable.startsWith(variable));
 
 describe('parent material thickness, butt welds (8.3.2, Table 7)', () => {
 	it.each([
-		[2, 'multi', 1.4, 4], // t <= 3: 0.7t to 2t // from memory
+		[2, 'multi', 1, 4], // t <= 3: 0.5t to 2t (one cell across the levels), ISO 15614-1:2017 Table 7
 		[10, 'multi', 3, 20], // 3 < t <= 12: 3 to 2t, ISO 15614-1:2017 Table 7
 		[20, 'multi', 10, 40], // 12 < t <= 20: 0.5t to 2t, ISO 15614-1:2017 Table 7
 		[60, 'multi', 30, 120], // 40 < t <= 100: 0.5t to 2t, ISO 15614-1:2017 Table 7
 		[150, 'multi', 50, 300], // 100 < t <= 150: 50 to 2t, ISO 15614-1:2017 Table 7
-		[2, 'single', 1.4, 2.6], // single run t <= 3: 0.7t to 1.3t // from memory
+		[2, 'single', 1, 4], // t <= 3, single run too: 0.5t to 2t, ISO 15614-1:2017 Table 7
 		[10, 'single', 5, 13], // single run 3 < t <= 12: 0.5t (3 min) to 1.3t, ISO 15614-1:2017 Table 7
 		[5, 'single', 3, 6.5], // 0.5t = 2.5 is below the 3 mm floor, ISO 15614-1:2017 Table 7
 		[20, 'single', 10, 22], // single run 12 < t <= 20: 0.5t to 1.1t, ISO 15614-1:2017 Table 7
@@ -42,7 +42,7 @@ describe('parent material thickness, butt welds (8.3.2, Table 7)', () => {
 		const read = isoThicknessRange(10);
 		expect(read.ok && read.source.kind).toBe('published');
 		const thin = isoThicknessRange(2);
-		expect(thin.ok && thin.source.kind).toBe('from memory'); // the t <= 3 mm row, see above
+		expect(thin.ok && thin.source.kind).toBe('published');
 	});
 	it('refuses nonsense with a message', () => {
 		for (const x of [0, -1, NaN, '10', null]) expect(isoThicknessRange(x).ok).toBe(false);
