@@ -329,7 +329,7 @@ export const ISO_9606_1_VALIDITY: Source = {
 export const ISO_6947: Source = {
 	label: 'ISO 6947 welding positions (PA to PH, PJ, H-L045, J-L045)',
 	edition:
-		'ISO 6947:2011/2019. PA-PG (main positions) read from a public reprint of the ISO 6947 text and a welding course page (corso-saldatura.it), with PH (pipe, welding upwards); PJ, H-L045, J-L045 recalled. ASME/AWS equivalents: 1G/1F PA, 2F PB, 2G PC, 4F PD, 4G PE read in a public position chart that cites BS EN ISO 15614-1, ASME IX and AWS D1.1; 3G, 3F, 5G, 5F, 6G recalled',
+		'ISO 6947:2011/2019. PA-PG (main positions) read from a public reprint of the ISO 6947 text and a welding course page (corso-saldatura.it); PH, PJ, H-L045 and J-L045 with their directions (up, down) as ISO 9606-1:2012 5.8 and Tables 9, 10 use them. ASME/AWS equivalents: 1G/1F PA, 2F PB, 2G PC, 4F PD, 4G PE read in a public position chart that cites BS EN ISO 15614-1, ASME IX and AWS D1.1; 3G, 3F, 5G, 5F, 6G recalled',
 	kind: 'from memory',
 	note: 'Kept as from memory because the table mixes read and recalled rows; ISO 6947 Annex B (comparison of designations) was not read.'
 };
