@@ -1,6 +1,6 @@
 // ISO 15614-1 ranges of qualification from one test coupon (clause 8). Pure; never throws; a
-// range it gives is never empty or inverted. Rows carry their source (read from the 2017+A1:2019
-// text, or recalled where that copy was unreadable): the standard the contract names decides.
+// range it gives is never empty or inverted. Rows carry their source (read from the 2017 and
+// 2017+A1:2019 texts): the standard the contract names decides.
 import {
 	ISO_15614_1_DIAMETER,
 	ISO_15614_1_HEAT_INPUT,

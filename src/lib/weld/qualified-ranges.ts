@@ -59,7 +59,7 @@ export type PqrRangesResult = ({ ok: true } & PqrRanges) | { ok: false; message:
  * QW-451.1 ranges for a groove-weld PQR. The row is chosen with the edges of the unit system the
  * coupon thickness was given in; fixed limits use the code's own value in that system (3/16 in or
  * 5 mm). The deposit answer is in the deposit's unit. Short-circuit GMAW under 1/2 in (13 mm)
- * takes the QW-403.10 / QW-404.32 1.1 limits (recalled, marked in the notes).
+ * takes the QW-403.10 / QW-404.32 1.1 limits (as stated in API RP 577 11.3; named in the notes).
  */
 export function pqrThicknessRange(
 	coupon: unknown,
