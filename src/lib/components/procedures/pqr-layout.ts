@@ -1,6 +1,13 @@
 // The PQR form's layout: the actual values used on the coupon, one value each. Data only;
 // PqrFormView renders it with the field components.
 import { processEntries, type Entry, type Section } from '$lib/components/fields/layout';
+import {
+	ENERGY_UNITS,
+	opts,
+	STRENGTH_UNITS,
+	TEST_RESULTS,
+	type TestKind
+} from '$lib/procedures/options';
 import type { VariableId } from '$lib/schemas/variables';
 
 const value = (id: VariableId, more: Partial<Entry> = {}): Entry => ({ name: id, of: id, ...more });
@@ -43,3 +50,26 @@ export const PQR_SECTIONS: readonly Section[] = [
 		]
 	}
 ];
+
+const results = opts(TEST_RESULTS, { pass: 'Pass', fail: 'Fail' });
+const decimal = { inputmode: 'decimal' };
+
+/** Each test's result and notes. */
+export const testEntries = (kind: TestKind): Entry[] => [
+	{ name: `${kind}Result`, label: 'Result', choices: results, empty: '—' },
+	{ name: `${kind}Notes`, label: 'Notes' }
+];
+
+/** What some tests measure besides: the tensile strengths, the absorbed energy. */
+export const TEST_VALUES: Partial<Record<TestKind, readonly Entry[]>> = {
+	tensile: [
+		{ name: 'tensile1', label: 'Specimen 1 strength', attrs: decimal },
+		{ name: 'tensile2', label: 'Specimen 2 strength', attrs: decimal },
+		{ name: 'tensileUnit', label: 'Unit', choices: opts(STRENGTH_UNITS) }
+	],
+	impact: [
+		{ name: 'impactEnergy', label: 'Absorbed energy', attrs: decimal },
+		{ name: 'impactUnit', label: 'Unit', choices: opts(ENERGY_UNITS) },
+		{ name: 'impactTemperature', label: 'Test temperature' }
+	]
+};
