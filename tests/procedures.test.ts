@@ -125,7 +125,7 @@ test('a draft from two records is reviewed, returned, fixed, signed, frozen and 
 	await expect(inForce.getByTestId('print-sheet')).toBeVisible();
 
 	// The trail, folded below, has every step, with the values before and after.
-	await eng.getByTestId('trail-fold').locator('summary').click();
+	await eng.getByTestId('trail-fold').locator(':scope > summary').click();
 	const trail = eng.getByTestId('trail-entry');
 	const actions = await trail.evaluateAll((els) => els.map((e) => e.getAttribute('data-action')));
 	expect(actions).toEqual([
