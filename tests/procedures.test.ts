@@ -112,6 +112,8 @@ test('a draft from two records is reviewed, returned, fixed, signed, frozen and 
 	await eng.getByLabel('Amperage, to').fill('135');
 	await eng.getByTestId('save-draft').click();
 	await eng.getByTestId('submit-revision').click();
+	// In review before the inspector opens it (else the review page may show the draft).
+	await expect(eng.getByTestId('state').first()).toHaveAttribute('data-state', 'in-review');
 	await approve(ins, path.replace(/\/1$/, '/2'));
 	await eng.goto(path);
 	await expect(eng.getByTestId('state').first()).toHaveAttribute('data-state', 'superseded');
