@@ -81,15 +81,18 @@ describe('describeEvent', () => {
 				action: 'settings_record.frozen',
 				at: AT,
 				before: { frozen: false },
-				after: { frozen: true, citedBy: 'WPS-007' }
+				after: { frozen: true, citedBy: 'WPS-007', procedureId: 4 }
 			},
 			imperial
 		);
+		// The internal procedure id stays in the raw entry only.
 		expect(frozen.changes.map((c) => c.line)).toEqual([
 			'frozen: no → yes',
 			'cited by procedure: WPS-007'
 		]);
 		expect(JSON.stringify(frozen)).not.toMatch(/true|false/);
+		const certified = changesInWords({ state: 'draft' }, { state: 'certified' }, imperial);
+		expect(certified[0]?.line).toBe('state: Draft → Certified');
 	});
 
 	it('gives the moment in UTC, labelled, or in the shop’s zone when one is set', () => {

@@ -62,13 +62,14 @@ export function changesInWords(before: unknown, after: unknown, reading: Reading
 	const a = leaves(before);
 	const b = leaves(after);
 	const paths = [...new Set([...a.keys(), ...b.keys()])].filter((p) => !same(a.get(p), b.get(p)));
-	return paths.map((path) => {
+	return paths.flatMap((path) => {
 		const field = fieldOf(path);
+		if (field.internal) return [];
 		const was = valueText(a.get(path), field.value, reading);
 		const now = valueText(b.get(path), field.value, reading);
 		const only = !a.has(path);
 		const line = `${inSentence(field.label)}: ${only ? now : `${was} → ${now}`}`;
-		return { path, label: field.label, before: only ? '' : was, after: now, line };
+		return [{ path, label: field.label, before: only ? '' : was, after: now, line }];
 	});
 }
 

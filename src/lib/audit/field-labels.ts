@@ -3,7 +3,13 @@
 // procedure variables come from the editor's own field table (RANGE_FIELDS / SINGLE_FIELDS), so a
 // quantity is named and converted the same way in the form and in the trail. Pure.
 import { RANGE_FIELDS, SINGLE_FIELDS } from '$lib/procedures/fields';
-import { BEAD_LABELS, CODE_LABELS, PASS_LABELS, STATE_LABELS } from '$lib/procedures/options';
+import {
+	BEAD_LABELS,
+	CODE_LABELS,
+	PASS_LABELS,
+	PQR_STATE_LABELS,
+	STATE_LABELS
+} from '$lib/procedures/options';
 import type { QuantityKind } from '$lib/procedures/quantities';
 import {
 	FAMILY_LABELS,
@@ -24,6 +30,8 @@ export type ValueKind =
 export interface FieldSpec {
 	label: string;
 	value: ValueKind;
+	/** An internal row number: kept in the raw entry, left out of the words. */
+	internal?: true;
 }
 
 const q = (label: string, quantity: QuantityKind): FieldSpec => ({ label, value: { quantity } });
@@ -33,6 +41,9 @@ const c = (label: string, choices: Readonly<Record<string, string>>): FieldSpec 
 });
 const t = (label: string): FieldSpec => ({ label, value: 'text' });
 
+const id = (label: string): FieldSpec => ({ label, value: 'text', internal: true });
+/** A revision's or a PQR's state: both kinds of object have a `state`. */
+const STATES = { ...STATE_LABELS, ...PQR_STATE_LABELS };
 const UNIT_SYSTEMS = { imperial: 'Imperial', metric: 'Metric' };
 const DECISIONS = { approved: 'Approved', returned: 'Returned with comments' };
 
@@ -108,7 +119,7 @@ const FIELDS: Record<string, FieldSpec> = {
 	frozen: t('Frozen'),
 	citedBy: t('Cited by procedure'),
 	// procedures, revisions, sign-offs, sheets and booth links
-	state: c('State', STATE_LABELS),
+	state: c('State', STATES),
 	rev: t('Revision'),
 	copiedFrom: t('Copied from revision'),
 	supersededByRev: t('Superseded by revision'),
@@ -120,12 +131,12 @@ const FIELDS: Record<string, FieldSpec> = {
 	printedName: t('Signed as'),
 	role: t('Role'),
 	signedAt: t('Signed'),
-	signOffId: t('Sign-off number'),
+	signOffId: id('Sign-off number'),
 	digest: t('Signature digest'),
 	problems: t('Problems found'),
 	seenIn: t('Seen in'),
-	procedureId: t('Procedure number (internal)'),
-	pqrIds: t('PQRs cited (internal numbers)'),
+	procedureId: id('Procedure number (internal)'),
+	pqrIds: id('PQRs cited (internal numbers)'),
 	recordIds: t('Settings records cited'),
 	fromRecords: t('Drafted from settings records'),
 	number: t('Number'),
@@ -134,16 +145,16 @@ const FIELDS: Record<string, FieldSpec> = {
 	intact: t('Matches its signature'),
 	sheets: t('Sheets'),
 	revisions: t('Revisions'),
-	revisionId: t('Revision (internal number)'),
-	revisionIds: t('Revisions (internal numbers)'),
+	revisionId: id('Revision (internal number)'),
+	revisionIds: id('Revisions (internal numbers)'),
 	notIntact: t('Not matching their signature'),
 	liveLinks: t('Live booth links'),
 	// PQRs and lab reports
 	certifiedBy: t('Certified by'),
 	certifiedAt: t('Certified'),
-	addendumId: t('Addendum number'),
+	addendumId: id('Addendum number'),
 	body: t('Text'),
-	reportId: t('Report number'),
+	reportId: id('Report number'),
 	bytes: { label: 'Size', value: 'bytes' },
 	sha256: t('SHA-256'),
 	found: t('SHA-256 found'),
@@ -158,12 +169,12 @@ const FIELDS: Record<string, FieldSpec> = {
 	expiresAt: t('Expires'),
 	replacedPending: t('Replaced a pending invite'),
 	usedAt: t('Accepted'),
-	userId: t('Member'),
+	userId: id('Member'),
 	revokedAt: t('Withdrawn'),
 	prefix: t('Token prefix'),
 	revoked: t('Links withdrawn'),
 	// welders, qualifications, continuity
-	welderId: t('Welder (internal number)'),
+	welderId: id('Welder (internal number)'),
 	usedOn: { label: 'Used on', value: 'day' },
 	source: t('Recorded from'),
 	note: t('Note'),
@@ -208,7 +219,7 @@ export function fieldOf(path: string): FieldSpec {
 	const label = [base.label, index !== undefined && known ? `item ${Number(index) + 1}` : null, end]
 		.filter(Boolean)
 		.join(', ');
-	return { label, value: base.value };
+	return { ...base, label };
 }
 
 /** A label inside a sentence: "Amperage" → "amperage", but "PWHT" and "P-Numbers" stay. */
