@@ -125,6 +125,10 @@ test('a draft from two records is reviewed, returned, fixed, signed, frozen and 
 	await expect(inForce.getByRole('heading', { name: 'Revision 2, in force' })).toBeVisible();
 	await expect(inForce.getByTestId('value-amps')).toContainText('135 A');
 	await expect(inForce.getByTestId('print-sheet')).toBeVisible();
+	// The "advises and records" line once: the cautions say it, so the footer's copy gives way.
+	await expect(eng.getByText(/Beadline advises and records/).filter({ visible: true })).toHaveCount(
+		1
+	);
 
 	// The trail, folded below, has every step, with the values before and after.
 	await eng.getByTestId('trail-fold').locator(':scope > summary').click();
