@@ -30,7 +30,7 @@ export interface PqrView {
 	values: PqrValues;
 	tests: TestResult[];
 	qualified: PqrQualified;
-	/** Governing code of the PQR (migration 0011). */
+	/** Governing code of the PQR (migration 0011); `asme-ix+iso` for one coupon to both. */
 	code: string;
 	/** The ISO 15614-1 result set, for an ISO PQR (shown beside the ASME one). */
 	iso: IsoResultSet | null;
@@ -152,7 +152,7 @@ export async function getPqr(
 		qualified: (safe(p.qualified) as PqrQualified | null) ?? qualifiedRanges(values),
 		// Issue 15: an ISO 15614-1 PQR shows the ISO result set beside the ASME one (computed now).
 		code: p.code,
-		iso: p.code === 'iso-15614-1' ? isoResultSet(values, tests) : null,
+		iso: ['iso-15614-1', 'asme-ix+iso'].includes(p.code) ? isoResultSet(values, tests) : null,
 		author: author?.name ?? 'former member',
 		certified:
 			p.certifiedAt && p.certifiedDigest

@@ -1,9 +1,8 @@
 // The demo shop qualifies to ISO as well as ASME (issue 15): one invented ISO 15614-1 coupon,
 // GMAW (135) on 10 mm S355-like plate in PF with impact tests, so its PQR page shows the ISO
 // result set beside the ASME one. Idempotent by its number, also for shops seeded before it.
-// Made through the services (create, certify), then marked ISO 15614-1.
+// Made through the services (create with its code, certify).
 import { pqrFormSchema } from '$lib/schemas/pqr';
-import { write } from '../db/write-queue';
 import { Pqr, type Shop } from '../models';
 import { certifyPqr, createPqr } from '../pqrs';
 import { member } from './seed-procedures';
@@ -13,6 +12,7 @@ export const ISO_PQR_NUMBER = 'PQR-ISO-01';
 const ISO_COUPON = {
 	number: ISO_PQR_NUMBER,
 	title: 'GMAW (135) 10 mm plate, multi-run, PF, ISO 15614-1 level 2',
+	code: 'iso-15614-1',
 	process: 'GMAW',
 	currentType: 'DCEP',
 	transfer: 'spray',
@@ -50,8 +50,5 @@ export async function seedIsoPqr(shop: Shop): Promise<number> {
 	if (!reuben) return 0;
 	const { id } = await createPqr(reuben, pqrFormSchema.parse(ISO_COUPON));
 	await certifyPqr(reuben, id);
-	await write(async (t) => {
-		await Pqr.update({ code: 'iso-15614-1' }, { where: { id, shopId: shop.id }, transaction: t });
-	});
 	return 1;
 }
