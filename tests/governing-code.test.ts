@@ -17,6 +17,7 @@ test('the shop sets its default code; new PQRs and procedures start from it; a c
 	const select = page.getByLabel('Governing code new work starts from');
 	await expect(select).toHaveValue('asme-ix');
 	await select.selectOption('iso-15614-1');
+	await expect(select).toHaveValue('iso-15614-1');
 	await page.getByRole('button', { name: 'Save' }).click();
 	await expect(page.getByText('Shop settings saved.')).toBeVisible();
 	await page.reload();
@@ -31,11 +32,13 @@ test('the shop sets its default code; new PQRs and procedures start from it; a c
 	const number = uniqueNumber('PQR-BOTH');
 	await page.getByLabel('Number').fill(number);
 	await page.getByLabel('Title').fill('GTAW 3/8 in plate to ASME IX and ISO 15614-1');
-	await page.getByLabel('Code it is qualified to').selectOption('asme-ix+iso');
 	await page.getByLabel('Current and polarity').selectOption('DCEN');
 	await page.getByLabel('Base metal').fill('A36');
 	await page.getByLabel('Test position').selectOption('3G');
 	await page.getByLabel('Coupon thickness T').fill('3/8');
+	const code = page.getByLabel('Code it is qualified to');
+	await code.selectOption('asme-ix+iso');
+	await expect(code).toHaveValue('asme-ix+iso');
 	await page.getByTestId('save-pqr').click();
 	await expect(page).toHaveURL(/\/pqrs\/\d+\?done=saved$/);
 	await expect(page.getByText('ASME IX and ISO 15614-1 (one coupon, both codes)')).toBeVisible();
@@ -74,6 +77,12 @@ test('WPS-002 (AWS D1.1) is judged by D1.1 on its review screen, and says where 
 	await expect(page.getByTestId('findings-pNumbers')).toContainText(
 		'No D1.1 rule modelled for this variable'
 	);
+	// Its coupon, PQR-002, follows D1.1 too: its D1.1 set beside the ASME IX one.
+	await page.getByRole('link', { name: 'PQR-002' }).first().click();
+	const d11 = page.getByTestId('both-codes').getByTestId('code-set-d11');
+	await expect(d11).toContainText('What it qualifies by AWS D1.1');
+	// AWS D1.1:2015 Table 4.2 as recalled: a 3/8 in test plate qualifies 1/8 in to 2T = 3/4 in.
+	await expect(d11).toContainText('1/8 in – 3/4 in');
 });
 
 test('WPS-ISO-01 is an approved ISO WPS backed by PQR-ISO-01, judged by ISO 15614-1, with a booth link', async ({

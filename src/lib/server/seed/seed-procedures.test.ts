@@ -30,6 +30,8 @@ describe('demo procedures', () => {
 		expect(await Pqr.count({ where: { shopId: shop.id, state: 'certified' } })).toBe(5);
 		const iso = await Pqr.findOne({ where: { shopId: shop.id, code: 'iso-15614-1' } });
 		expect(iso?.number).toBe('PQR-ISO-01');
+		const d11 = await Pqr.findOne({ where: { shopId: shop.id, number: 'PQR-002' } });
+		expect(d11?.code).toBe('aws-d1.1');
 		expect(await seedIsoPqr(shop)).toBe(0);
 		expect(await seedProcedures(shop)).toBe(0);
 		// Four ASME / D1.1 procedures and WPS-ISO-01 (issue 15).
