@@ -92,9 +92,9 @@ test('WPS-ISO-01 is an approved ISO WPS backed by PQR-ISO-01, judged by ISO 1561
 	const id = await procedureId('WPS-ISO-01');
 	await page.goto(`/procedures/${id}/revisions/1/review`);
 	await expect(page.getByTestId('judged-by')).toContainText('Judged by ISO 15614-1');
-	await expect(page.getByTestId('findings-thickness')).toContainText('ISO 15614-1 Table 6');
+	await expect(page.getByTestId('findings-thickness')).toContainText('ISO 15614-1 Table 7');
 	await expect(page.getByTestId('findings-gasName')).toContainText(
-		'ISO 15614-1 8.4.5 governs this variable'
+		'ISO 15614-1 8.5.2.1 / 8.5.3.1 governs this variable'
 	);
 	await page
 		.getByRole('link', { name: /PQR-ISO-01/ })

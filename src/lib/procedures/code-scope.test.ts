@@ -78,10 +78,11 @@ describe('positions by the revision’s own code', () => {
 	});
 	it('ISO 15614-1: positions beyond the test one are a caution naming 8.4.2, not outside', () => {
 		const [f] = codePositionFindings(wps002('iso-15609-1'), [pqr('3G')]);
-		// ISO 15614-1 8.4.2 as recalled in iso-15614-procedure.ts // from memory
+		// ISO 15614-1:2017 8.4.2 (read by main's sources: ISO_15614_1_2017, published)
 		expect(f).toMatchObject({ status: 'caution' });
 		expect(f!.message).toContain('ISO 15614-1 8.4.2');
-		expect(f!.source.kind).toBe('from memory');
+		expect(f!.message).toContain('vertical-down');
+		expect(f!.source.kind).toBe('published');
 	});
 	it('no test position recorded: it says so and borrows no other code’s rule', () => {
 		const [f] = codePositionFindings(wps002('aws-d1.1'), [pqr(null)]);
@@ -109,10 +110,11 @@ describe('variables the code has no rule for', () => {
 		// AWS D1.1:2015 Table 4.5 has no GTAW voltage limit as modelled (qualification-rules.ts)
 		expect(g!.message).toContain('No D1.1 rule modelled for this variable (voltage, GTAW)');
 	});
-	it('ISO 15614-1: the gas rule is named (8.4.5) but said not to be compared yet', () => {
+	it('ISO 15614-1: the gas rule is named (8.5.2.1 / 8.5.3.1) but said not to be compared yet', () => {
 		const gaps = codeGapFindings(wps002('iso-15609-1'), [pqr()]);
 		const gas = gaps.find((g) => g.at === 'gasName');
-		expect(gas!.message).toContain('ISO 15614-1 8.4.5 governs this variable'); // from memory
+		// ISO 15614-1:2017 8.5.2.1 / 8.5.3.1 (governing-code.ts, read by main from the 2017 text)
+		expect(gas!.message).toContain('ISO 15614-1 8.5.2.1 / 8.5.3.1 governs this variable');
 		expect(gaps.find((g) => g.at === 'pNumbers')!.message).toContain('ISO/TR 15608');
 		// ISO volts are said once per PQR by code-findings.ts, not again here.
 		expect(gaps.some((g) => g.at === 'volts')).toBe(false);

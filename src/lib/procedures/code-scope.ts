@@ -3,7 +3,7 @@
 // current-type sources in the procedure's own code, and a plain "no D1.1 rule modelled for this
 // variable" where Beadline has no rule of that code, instead of another code's. Pure.
 import { codeRule, d11WpsPositions, type Finding, type FindingSource } from '$lib/weld';
-import { AWS_D1_1_TABLE_4_5, ISO_15614_1_RANGES } from '$reference/sources';
+import { AWS_D1_1_TABLE_4_5, ISO_15614_1_2017 } from '$reference/sources';
 import type { Source } from '$reference/types';
 import type { RevisionVariables } from '$lib/schemas/procedure';
 import type { ProcedureFinding } from './findings';
@@ -45,8 +45,8 @@ export function ownCodeSource(code: CodeId, variable: 'process' | 'currentType',
 	if (code === 'aws-d1.1') return AWS_D1_1_TABLE_4_5;
 	if (code === 'iso-15609-1')
 		return {
-			...ISO_15614_1_RANGES,
-			label: `ISO 15614-1 ${variable === 'process' ? '8.4.1 (process)' : '8.4.6 (current type)'}`
+			...ISO_15614_1_2017,
+			label: `ISO 15614-1:2017 ${variable === 'process' ? '8.4.1 (process)' : '8.4.6 (current type)'}`
 		};
 	return asme;
 }
@@ -119,10 +119,10 @@ export function codePositionFindings(
 			...base,
 			status: beyond.length ? 'caution' : 'ok',
 			message: beyond.length
-				? `${beyond.join(', ')} ${beyond.length > 1 ? 'go' : 'goes'} beyond the test position of ${names} (${tests.join(', ')}). ISO 15614-1 8.4.2: one position qualifies all positions where no impact or hardness requirement applies; where one does, the impact specimens come from the highest and the hardness from the lowest heat-input position. Confirm which applies; vertical-down (PG) is not modelled.`
+				? `${beyond.join(', ')} ${beyond.length > 1 ? 'go' : 'goes'} beyond the test position of ${names} (${tests.join(', ')}). ISO 15614-1 8.4.2: one position qualifies all positions where no impact or hardness requirement applies; where one does, the impact specimens come from the highest and the hardness from the lowest heat-input position. Confirm which applies; vertical-down positions (PG, PJ, J-L045) need a test piece of their own.`
 				: `Every position is the test position of ${names} (${tests.join(', ')}; ISO 15614-1 8.4.2).`,
 			expected: { unit: tests.join(', ') },
-			source: { label: 'ISO 15614-1 8.4.2 (welding position)', kind: ISO_15614_1_RANGES.kind }
+			source: { label: 'ISO 15614-1:2017 8.4.2 (welding position)', kind: ISO_15614_1_2017.kind }
 		}
 	];
 }
