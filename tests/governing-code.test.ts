@@ -96,10 +96,9 @@ test('WPS-ISO-01 is an approved ISO WPS backed by PQR-ISO-01, judged by ISO 1561
 	await expect(page.getByTestId('findings-gasName')).toContainText(
 		'ISO 15614-1 8.5.2.1 / 8.5.3.1 governs this variable'
 	);
-	await page
-		.getByRole('link', { name: /PQR-ISO-01/ })
-		.first()
-		.click();
+	await page.goto(`/procedures/${id}/revisions/1`);
+	await expect(page.getByTestId('judged-by')).toContainText('Judged by ISO 15614-1');
+	await page.getByRole('link', { name: 'PQR-ISO-01' }).first().click();
 	await expect(page.getByTestId('both-codes')).toBeVisible();
 	await page.goto(`/b/${await boothToken('WPS-ISO-01', 1)}`);
 	await expect(page.getByTestId('booth-number')).toHaveText('WPS-ISO-01');
