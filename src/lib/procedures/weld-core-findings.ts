@@ -2,6 +2,7 @@
 // amps with slow travel), each finding placed beside the display row it concerns.
 import { runChecks, type Finding, type UnitSystem, type WeldSettings } from '$lib/weld';
 import type { RevisionVariables } from '$lib/schemas/procedure';
+import { inOwnCode } from './code-scope';
 import { n, type ProcedureFinding } from './procedure-finding';
 
 const AT: Record<string, string> = {
@@ -65,8 +66,10 @@ function endSettings(v: RevisionVariables, end: 'low' | 'high'): WeldSettings {
 }
 
 export function weldCoreFindings(v: RevisionVariables, system: UnitSystem): ProcedureFinding[] {
-	const low = runChecks(endSettings(v, 'low'), { system }).findings;
-	const high = runChecks(endSettings(v, 'high'), { system }).findings;
+	// A D1.1 table quoted on a revision of another code says so (code-scope.ts).
+	const own = (f: Finding) => inOwnCode(f, v.code);
+	const low = runChecks(endSettings(v, 'low'), { system }).findings.map(own);
+	const high = runChecks(endSettings(v, 'high'), { system }).findings.map(own);
 	const key = (f: Finding) => `${f.check}|${f.field ?? ''}|${f.message}`;
 	const lowKeys = new Set(low.map(key));
 	const highKeys = new Set(high.map(key));

@@ -1,6 +1,7 @@
 // The PQR form's layout: the actual values used on the coupon, one value each. Data only;
 // PqrFormView renders it with the field components.
 import { processEntries, type Entry, type Section } from '$lib/components/fields/layout';
+import { PQR_CODE_LABELS, PQR_CODES } from '$lib/procedures/default-code';
 import {
 	ENERGY_UNITS,
 	opts,
@@ -18,6 +19,11 @@ export const PQR_SECTIONS: readonly Section[] = [
 		entries: [
 			{ name: 'number', label: 'Number' },
 			{ name: 'title', label: 'Title' },
+			{
+				name: 'code',
+				label: 'Code it is qualified to',
+				choices: opts(PQR_CODES, PQR_CODE_LABELS)
+			},
 			{ name: 'weldedOn', label: 'Date welded', attrs: { type: 'date' } },
 			{ name: 'welder', label: 'Welder' },
 			{ name: 'lab', label: 'Testing lab' }
