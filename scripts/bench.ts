@@ -25,6 +25,7 @@ import { printFigures, writeFigures, type BenchFigures, type GrowthRow } from '.
 import { addProcedures, addRecords, addShops } from './bench/seed-bulk';
 import { benchDatabase, type BenchDatabaseKind } from './bench/database';
 import { multiProcess } from './bench/multi';
+import { serverArgs } from './lib/server-process';
 
 const arg = (name: string, fallback: number) => {
 	const i = process.argv.indexOf(name);
@@ -100,7 +101,7 @@ const seedSeconds = (Date.now() - seedStart) / 1000;
 
 // ---- the server ----
 await startCatcher();
-const server = spawn(process.execPath, [`${buildDir}/index.js`], {
+const server = spawn(process.execPath, serverArgs(`${buildDir}/index.js`), {
 	env: store.env,
 	stdio: ['ignore', 'ignore', 'inherit']
 });

@@ -9,6 +9,7 @@ import {
 	startChild,
 	waitForHttp
 } from './lib/local-stack';
+import { serverArgs } from './lib/server-process';
 
 const port = Number(process.env.PORT ?? 4173);
 stackEnv({
@@ -24,6 +25,6 @@ if (!process.argv.includes('--no-build') || !existsSync('build/index.js')) {
 }
 await prepareDatabase({ seed: true });
 await startCatcher();
-startChild(process.execPath, ['build/index.js']);
+startChild(process.execPath, serverArgs('build/index.js'));
 await waitForHttp(`http://127.0.0.1:${port}/signin`);
 await printBanner(process.env.ORIGIN ?? `http://localhost:${port}`);

@@ -1,6 +1,7 @@
 // Started by Playwright's webServer: the built app on E2E_PORT with a throw-away data folder.
 import { existsSync } from 'node:fs';
 import { prepareDatabase, stackEnv, startCatcher, startChild } from './lib/local-stack';
+import { serverArgs } from './lib/server-process';
 
 const port = Number(process.env.E2E_PORT);
 const smtpPort = Number(process.env.E2E_SMTP_PORT);
@@ -19,4 +20,4 @@ process.env.TEST_ONLY_LIFT_ADDRESS_CAPS = '1';
 process.env.BEADLINE_JOBS = 'off';
 await prepareDatabase({ seed: true });
 await startCatcher();
-startChild(process.execPath, [`${buildDir}/index.js`]);
+startChild(process.execPath, serverArgs(`${buildDir}/index.js`));

@@ -9,6 +9,7 @@ import { startProxy } from '../../tests/support/round-robin-proxy';
 import { waitFor } from './http';
 import { load, type LoadResult, type Route } from './load';
 import { freePort } from './ports';
+import { serverArgs } from '../lib/server-process';
 
 export interface MultiRow {
 	processes: number;
@@ -27,10 +28,14 @@ async function behindProxy(
 	try {
 		for (let i = 1; i <= n; i++) {
 			const port = await freePort();
-			const child = spawn(process.execPath, [`${process.env.BUILD_DIR ?? 'build'}/index.js`], {
-				env: { ...env, PORT: String(port) },
-				stdio: ['ignore', 'ignore', 'inherit']
-			});
+			const child = spawn(
+				process.execPath,
+				serverArgs(`${process.env.BUILD_DIR ?? 'build'}/index.js`),
+				{
+					env: { ...env, PORT: String(port) },
+					stdio: ['ignore', 'ignore', 'inherit']
+				}
+			);
 			children.push(child);
 			proxy.add({ name: `app${i}`, port });
 			await waitFor(`http://localhost:${port}/api/v1/health`);
