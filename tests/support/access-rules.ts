@@ -58,6 +58,9 @@ export const ACCESS_RULES: Record<string, Access> = {
 	'GET /booth': members,
 	'GET /help/checks': pub(),
 	'GET /offline': pub(), // the service worker's "not on this phone" page: names nobody
+	'GET /jobs': members, // the welder opens a job to log a weld
+	'GET /jobs/[id=id]': members,
+	'GET /jobs/new': roles(AUTHOR),
 	'GET /invite/[token]': pub([404, 410]), // no live invite token can be read back (hashed)
 	'GET /pqrs': roles(VIEW),
 	'GET /pqrs/[id=id]': roles(VIEW),
@@ -131,6 +134,10 @@ export const ACCESS_RULES: Record<string, Access> = {
 	'POST /api/v1/welders/[id=id]/qualifications': roles(MANAGE),
 	'POST /b/[token]?/used': members,
 	'POST /invite/[token]?/accept': pub([400, 404, 410]),
+	'POST /jobs/[id=id]?/addJoint': roles(AUTHOR),
+	'POST /jobs/[id=id]?/importJoints': roles(AUTHOR),
+	'POST /jobs/[id=id]?/log': roles(['welder']), // only the welder logs their own weld
+	'POST /jobs/new': roles(AUTHOR),
 	'POST /pqrs/[id=id]?/addendum': roles(AUTHOR),
 	'POST /pqrs/[id=id]?/certify': roles(CERTIFY),
 	'POST /pqrs/[id=id]?/upload': roles(AUTHOR),

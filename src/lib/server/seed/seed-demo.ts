@@ -6,6 +6,7 @@ import { seedWelders } from './seed-welders';
 import { seedProcedures } from './seed-procedures';
 import { seedIsoPqr } from './seed-iso';
 import { seedRecords } from './seed-records';
+import { seedJobs } from './seed-jobs';
 
 async function seedShop(name: string, people: DemoPerson[]): Promise<Shop> {
 	const hashes = await Promise.all(people.map((p) => hashPassword(p.password)));
@@ -41,5 +42,6 @@ export async function seedDemo(): Promise<{ shop: Shop; other: Shop }> {
 	await seedRecords(shop);
 	await seedProcedures(shop);
 	await seedIsoPqr(shop);
+	await seedJobs(shop);
 	return { shop, other };
 }

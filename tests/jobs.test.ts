@@ -1,0 +1,78 @@
+// A job from opening to its joint list: the engineer opens it, pastes a list with mistakes
+// (every line named, nothing added), fixes it and adds it whole; a welder can read it.
+import { expect, test } from '@playwright/test';
+import { engineer, signIn, welder } from './support/people';
+import { uniqueNumber } from './support/procedures';
+
+test.describe.configure({ timeout: 90_000 });
+
+test('an engineer opens a job and lists its joints from a pasted list', async ({
+	page,
+	browser
+}) => {
+	await signIn(page, engineer);
+	await page.goto('/jobs/new');
+	const number = uniqueNumber('JOB');
+	await page.getByLabel('Job number').fill(number);
+	await page.getByLabel('Customer').fill('Invented Mills');
+	await page.getByLabel('Part or assembly').fill('Conveyor frame');
+	await page.getByRole('button', { name: 'Open the job' }).click();
+	await expect(page).toHaveURL(/\/jobs\/\d+\?created=1$/);
+	const jobUrl = new URL(page.url()).pathname;
+
+	const csv = page.getByLabel('Joint list');
+	await csv.fill(
+		'mark,type,position,procedure\nJ1,tee,2F,WPS-001\nJ2,spiral,2F,WPS-001\nJ3,tee,2F,WPS-NONE'
+	);
+	await page.getByRole('button', { name: 'Check and add' }).click();
+	const problems = page.getByTestId('csv-problems');
+	await expect(problems).toContainText('Line 3 (J2): type:');
+	await expect(problems).toContainText('Line 4 (J3): procedure: no procedure WPS-NONE');
+	await expect(page.getByTestId('joints-table')).toHaveCount(0);
+	await expect(csv).toHaveValue(/J2,spiral/); // what was pasted is kept to fix in place
+
+	await csv.fill('mark,type,position,procedure\nJ1,tee,2F,WPS-001\nJ2,tee,1F,WPS-001');
+	await page.getByRole('button', { name: 'Check and add' }).click();
+	await expect(page.getByText('2 joints added.')).toBeVisible();
+	await expect(page.getByTestId('joint-row')).toHaveCount(2);
+	await expect(page.getByTestId('joint-row').first()).toContainText('WPS-001 rev 2');
+
+	await page.getByLabel('Mark').fill('J3');
+	await page.getByLabel('Position').selectOption('2F');
+	await page.getByLabel('Procedure number').fill('WPS-002');
+	await page.getByRole('button', { name: 'Add the joint' }).click();
+	await expect(page.getByTestId('joint-row')).toHaveCount(3);
+
+	const w = await (await browser.newContext()).newPage();
+	await signIn(w, welder);
+	await w.goto(jobUrl);
+	await expect(w.getByTestId('joint-row')).toHaveCount(3);
+	await expect(w.getByTestId('add-joint')).toHaveCount(0);
+	await w.goto('/jobs/new');
+	await expect(w.getByText(/403|not allow/i).first()).toBeVisible();
+});
+
+test('a welder logs passes on a joint; an unqualified position is refused in words', async ({
+	page
+}) => {
+	await signIn(page, welder);
+	await page.goto('/booth');
+	await page.getByTestId('booth-jobs').click();
+	await page.getByRole('link', { name: 'JOB-2026-014' }).click();
+	// Tomas holds GMAW 2G: fillet F and H by QW-461.9, not V. W4 is a 2F fillet to WPS-002 (GMAW).
+	const w4 = page.locator('[data-testid="joint-row"][data-mark="W4"]');
+	await w4.getByLabel('Root').check();
+	await w4.getByLabel('Fill').check();
+	await w4.getByRole('button', { name: 'Welded by me today' }).click();
+	await expect(w4.getByTestId('weld-logs')).toContainText('Root: LTR-07 Tomas Whitlow');
+	await expect(w4.getByTestId('weld-logs')).toContainText('Fill');
+	await expect(w4.getByLabel('Root')).toHaveCount(0); // a logged pass is not offered again
+
+	const w5 = page.locator('[data-testid="joint-row"][data-mark="W5"]');
+	await w5.getByLabel('Root').check();
+	await w5.getByRole('button', { name: 'Welded by me today' }).click();
+	await expect(w5.getByTestId('log-refused')).toContainText(
+		'Tomas Whitlow may not weld W5 to WPS-002 rev 1: not qualified for fillet V'
+	);
+	await expect(w5.getByTestId('weld-logs')).toHaveCount(0);
+});
