@@ -3,7 +3,9 @@ import {
 	ASME_IX_QW_432_MEMORY,
 	ASME_IX_QW_442,
 	ASME_IX_QW_442_MEMORY,
-	AWS_A5_CLASSIFICATION
+	AWS_A5_CLASSIFICATION,
+	ISO_15614_1_TABLE_A1,
+	ISO_15614_1_TABLE_A2
 } from './sources';
 import type { MetalFamily, Source } from './types';
 
@@ -30,6 +32,8 @@ const F = ASME_IX_QW_432;
 const FM = ASME_IX_QW_432_MEMORY;
 const A = ASME_IX_QW_442;
 const AM = ASME_IX_QW_442_MEMORY;
+/** A-Numbers read off the QW-442 analysis ranges as printed in ISO 15614-1 Table A.2. */
+const A2 = ISO_15614_1_TABLE_A2;
 const S = AWS_A5_CLASSIFICATION;
 
 const a518 = (n: string, meaning: string): FillerRow => ({
@@ -76,7 +80,8 @@ export const FILLERS: readonly FillerRow[] = [
 		meaning: 'Low-alloy solid wire, 80 ksi, 1-1/4 Cr - 1/2 Mo (B2) for chrome-moly steel',
 		source: S,
 		fNumberSource: F,
-		aNumberSource: AM
+		// 1-1/4 Cr - 1/2 Mo falls in A-3 (Cr 0.40-2.00, Mo 0.40-0.65).
+		aNumberSource: A2
 	},
 	...(['308L', '309L', '316L', '308LSi', '309LSi', '316LSi'] as const).map((t): FillerRow => ({
 		classification: `ER${t}`,
@@ -89,7 +94,8 @@ export const FILLERS: readonly FillerRow[] = [
 		meaning: `Stainless type ${t.replace(/L.*/, '')}, L = low carbon${t.endsWith('Si') ? ', Si = higher silicon for wetting' : ''}${t.startsWith('309') ? '; also used to join stainless to carbon steel' : ''}`,
 		source: S,
 		fNumberSource: F,
-		aNumberSource: t.startsWith('309') ? AM : A
+		// 308 (about 20 Cr, 10 Ni), 309 (23 Cr, 12-13 Ni), 316 (19 Cr, 12 Ni, 2.5 Mo): all in A-8.
+		aNumberSource: A2
 	})),
 	...(
 		[
@@ -135,7 +141,7 @@ export const A5_20_USABILITY: Readonly<
 	'11': { gas: 'none', polarity: 'DCEN', note: 'self-shielded, general purpose' }
 };
 
-/** A5.1 covered electrodes: last two digits to F-Number (QW-432, recalled). */
+/** A5.1 covered electrodes: last two digits to F-Number (QW-432 groups, as in ISO 15614-1 Table A.1). */
 export const A5_1_F_NUMBER: Readonly<Record<string, number>> = {
 	'10': 3,
 	'11': 3,
@@ -153,4 +159,11 @@ export const A5_1_F_NUMBER: Readonly<Record<string, number>> = {
 	'18': 4,
 	'48': 4
 };
-export const A5_1_F_NUMBER_SOURCE: Source = FM;
+/** Digits whose F-Number was read (Table A.1); EXX22 is not in that table and stays recalled. */
+export const a5_1FNumberSource = (usability: string): Source =>
+	usability === '22' ? FM : ISO_15614_1_TABLE_A1;
+/**
+ * A5.1 carbon steel deposits: A-1 (mild steel) by the Table A.2 ranges (A5.1 caps Mn at 1.60 %,
+ * the A-1 limit). A5.20 flux-cored deposits may carry more manganese, so theirs stays recalled.
+ */
+export const A5_1_A_NUMBER_SOURCE: Source = A2;

@@ -55,10 +55,11 @@ export const ASME_IX_QW_452_3: Source = {
 };
 
 export const ASME_IX_QW_403_10: Source = {
-	label: 'ASME BPVC Section IX QW-403.10 (GMAW short-circuit)',
-	edition: 'BPVC IX, recalled',
-	kind: 'from memory',
-	note: 'Coupon under 1/2 in welded short-circuit: maximum qualified 1.1T. Verify in the code.'
+	label: 'ASME BPVC Section IX QW-403.10 and QW-404.32 (GMAW short-circuit)',
+	edition:
+		'as stated in API RP 577 (Welding Processes, Inspection, and Metallurgy) 11.3, "Lack of fusion with GMAW-S", read from a public reproduction of its text',
+	kind: 'published',
+	note: "Coupon under 1/2 in (12.7 mm) welded short-circuit: base metal qualified up to 1.1 times the coupon thickness (QW-403.10), deposit up to 1.1 times the deposit (QW-404.32). Beadline uses the code's 13 mm metric column."
 };
 
 export const ASME_IX_QW_422: Source = {
@@ -95,6 +96,21 @@ export const ASME_IX_QW_442_MEMORY: Source = {
 	label: 'ASME BPVC Section IX QW-442 (A-Numbers)',
 	edition: 'recalled, no copy at hand; the A-Number really follows the deposit analysis',
 	kind: 'from memory'
+};
+
+export const ISO_15614_1_TABLE_A1: Source = {
+	label: 'ISO 15614-1:2017 Annex A Table A.1 (level 1 F-Numbers of covered electrodes)',
+	edition:
+		'BS EN ISO 15614-1:2017+A1:2019, read from a text copy of the standard; column B (classification by tensile strength) uses the AWS A5.1 digits',
+	kind: 'published',
+	note: 'F-1: EXX20, EXX24, EXX27, EXX28; F-2: EXX12, EXX13, EXX14, EXX19; F-3: EXX10, EXX11; F-4: EXX15, EXX16, EXX18, EXX48. Level 1 is the ASME IX based level, so these are the QW-432 groups. EXX22 is not listed there.'
+};
+
+export const ISO_15614_1_TABLE_A2: Source = {
+	label: 'ISO 15614-1:2017 Annex A Table A.2 (level 1 A-Numbers by weld metal analysis)',
+	edition: 'BS EN ISO 15614-1:2017+A1:2019, read from a text copy of the standard',
+	kind: 'published',
+	note: 'The twelve QW-442 analysis ranges: A-1 mild steel (C 0.20, Cr 0.20, Mo 0.30, Ni 0.50, Mn 1.60, Si 1.00 max); A-3 Cr 0.40-2.00, Mo 0.40-0.65; A-8 Cr 14.50-30.00, Ni 7.50-15.00, Mo 4.00 max. Applied here to the nominal composition of the classification; the deposit analysis decides.'
 };
 
 export const AWS_A5_CLASSIFICATION: Source = {
@@ -252,11 +268,19 @@ export const PROCEDURE_RANGES: Source = {
 // hand: their rows are recalled and marked so, except where a public page quoted the clause.
 
 export const ISO_15614_1_RANGES: Source = {
-	label: 'ISO 15614-1 clause 8 (range of qualification)',
+	label: 'ISO 15614-1 clause 8 (range of qualification), readings not in the text',
 	edition:
-		'ISO 15614-1:2017+A1:2019, rows recalled (same rows as the 2004 edition, Tables 5 and 6)',
+		'ISO 15614-1:2017+A1:2019, recalled: that sub-group 1.4 (weather-resistant steels) qualifies itself only; Table 5 does not name sub-groups of group 1',
 	kind: 'from memory',
-	note: 'Level 2 rows. Verify every range in the standard before relying on it.'
+	note: 'Level 2 rows. Verify these in the standard before relying on them.'
+};
+
+export const ISO_15614_1_2017: Source = {
+	label: 'ISO 15614-1:2017+A1:2019 clause 8 (range of qualification), level 2',
+	edition:
+		'BS EN ISO 15614-1:2017+A1:2019 (identical to ISO 15614-1:2017 with Amd 1:2019) and UNI EN ISO 15614-1:2017, read from text copies of the standard: 8.3.1 Table 5, 8.3.2 Table 7, 8.3.3 Table 9, 8.4.1-8.4.11, 8.5.2, Annex A Tables A.1 and A.2',
+	kind: 'published',
+	note: 'Level 2 columns. Table 7: t <= 3 one cell across the levels, 0.5t to 2t; 3 < t <= 12 single run 0.5t (3 min) to 1.3t, multi-run 3 to 2t; 12 < t <= 40 single run 0.5t to 1.1t; 12 < t <= 100 multi-run 0.5t to 2t; 40 < t <= 100 no single-run row; over 100 mm multi-run 50 to 2t. Table 9: D qualifies 0.5D and over. 8.4.8: preheat may drop 50 degC; 8.4.9: interpass may rise 50 degC (groups 8, 10, 41-48: the highest reached).'
 };
 
 export const ISO_15614_1_LEVELS: Source = {
@@ -273,10 +297,19 @@ export const ISO_TR_15608: Source = {
 };
 
 export const ISO_9606_1_RANGES: Source = {
-	label: 'ISO 9606-1 clause 5 (range of qualification)',
-	edition: 'ISO 9606-1:2012 (Tables 2 to 12), rows recalled',
+	label: 'ISO 9606-1 clause 5 (range of qualification), readings not in the text',
+	edition:
+		'ISO 9606-1:2012, recalled: that H-L045 and J-L045 also qualify the fixed-pipe position of their direction (PH, PJ), which Table 9 has no column for',
 	kind: 'from memory',
-	note: 'Verify every range in the standard before relying on it.'
+	note: 'Verify in the standard before relying on it.'
+};
+
+export const ISO_9606_1_2012: Source = {
+	label: 'ISO 9606-1:2012 clause 5 (essential variables and range of qualification)',
+	edition:
+		'BS EN ISO 9606-1:2017 (identical to ISO 9606-1:2012 with Cor 1:2012), read from a text copy of the standard: 5.2, 5.3, 5.4, 5.5 Tables 2 and 3, 5.7 Tables 6, 7 and 8, 5.8 Tables 9 and 10',
+	kind: 'published',
+	note: 'Table 6 (deposited thickness, butt): s < 3: s to 3 or 2s, whichever is greater; 3 <= s < 12: 3 to 2s; s >= 12: 3 and over. Table 7: D <= 25: D to 2D; D > 25: 0.5D, 25 mm min. Table 8 (fillet): t < 3: t to 2t or 3, whichever is greater; t >= 3: 3 and over. 5.5.2: any filler group also qualifies parent groups 1 to 11. 5.2: 135/138 and 121/125 cover each other; 141, 143, 145 qualify 141, 142, 143, 145; 142 only itself. The comparison signs of 5.3 were not legible in the copy.'
 };
 
 export const ISO_9606_1_FILLET_SUPPLEMENT: Source = {
@@ -296,8 +329,9 @@ export const ISO_9606_1_VALIDITY: Source = {
 export const ISO_6947: Source = {
 	label: 'ISO 6947 welding positions (PA to PH, PJ, H-L045, J-L045)',
 	edition:
-		'ISO 6947:2019 (and 2011), names recalled; the ASME/AWS equivalents are the usual correspondence, not a table of either code',
-	kind: 'from memory'
+		'ISO 6947:2011/2019. PA-PG (main positions) read from a public reprint of the ISO 6947 text and a welding course page (corso-saldatura.it); PH, PJ, H-L045 and J-L045 with their directions (up, down) as ISO 9606-1:2012 5.8 and Tables 9, 10 use them. ASME/AWS equivalents: 1G/1F PA, 2F PB, 2G PC, 4F PD, 4G PE read in a public position chart that cites BS EN ISO 15614-1, ASME IX and AWS D1.1; 3G, 3F, 5G, 5F, 6G recalled',
+	kind: 'from memory',
+	note: 'Kept as from memory because the table mixes read and recalled rows; ISO 6947 Annex B (comparison of designations) was not read.'
 };
 
 export const EN_1011_2_CET: Source = {

@@ -45,6 +45,7 @@ export const PROCEDURE_SOURCES: readonly Source[] = [
 	QW_401,
 	QW_409_4,
 	S.ASME_IX_QW_255_256,
+	S.ISO_15614_1_2017,
 	S.ISO_15614_1_RANGES,
 	PRODUCT
 ];
@@ -122,7 +123,7 @@ export const PROCEDURE_CHECK_CATALOGUE: readonly ProcedureCatalogueEntry[] = [
 	e(
 		'pqr-code-rules',
 		'Changes from the PQR, by the procedure’s own code',
-		'ASME IX procedures: each change from the PQR classed by QW-255 (GMAW, FCAW) or QW-256 (GTAW) as essential, supplementary essential or nonessential. ISO 15614-1 procedures: transfer mode by 8.4.1, and a plain note where the standard has no range for the variable. D1.1 procedures keep the Table 4.5 triggers.',
-		[S.ASME_IX_QW_255_256, S.ISO_15614_1_RANGES, S.AWS_D1_1_TABLE_4_5]
+		'ASME IX procedures: each change from the PQR classed by QW-255 (GMAW, FCAW) or QW-256 (GTAW) as essential, supplementary essential or nonessential. ISO 15614-1 procedures: transfer mode by 8.5.2.3, and a plain note where the standard has no range for the variable. D1.1 procedures keep the Table 4.5 triggers.',
+		[S.ASME_IX_QW_255_256, S.ISO_15614_1_2017, S.AWS_D1_1_TABLE_4_5]
 	)
 ];

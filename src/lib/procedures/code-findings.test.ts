@@ -26,7 +26,10 @@ const qualified = (over: Partial<PqrQualified> = {}): PqrQualified => ({
 		max: { value: 6.99, unit: 'mm' },
 		row: 'QW-451.1',
 		notes: [],
-		source: { label: 'ASME BPVC Section IX QW-403.10 (GMAW short-circuit)', kind: 'from memory' }
+		source: {
+			label: 'ASME BPVC Section IX QW-403.10 and QW-404.32 (GMAW short-circuit)',
+			kind: 'published'
+		}
 	},
 	depositedMax: null,
 	positions: null,
@@ -58,11 +61,11 @@ describe('thickness by the procedure’s own code', () => {
 	});
 	it('ASME IX keeps QW-451.1 with QW-403.10: 12.7 mm is outside 1.1T', () => {
 		const found = of(revision('asme-ix', range), [pqr()], 'pqr-ranges');
-		expect(found.find((f) => f.end === 'high')?.status).toBe('outside'); // QW-403.10 // from memory
+		expect(found.find((f) => f.end === 'high')?.status).toBe('outside'); // QW-403.10: 1.1 x 6.35 = 6.99 mm (API RP 577 11.3)
 	});
-	it('ISO 15614-1: 6.35 mm multi-run qualifies 3 to 12.7 mm (Table 6)', () => {
+	it('ISO 15614-1: 6.35 mm multi-run qualifies 3 to 12.7 mm (Table 7)', () => {
 		const found = of(revision('iso-15609-1', range), [pqr()], 'pqr-ranges');
-		expect(found.map((f) => f.status)).toEqual(['ok', 'ok']); // ISO 15614-1 Table 6 // from memory
+		expect(found.map((f) => f.status)).toEqual(['ok', 'ok']); // ISO 15614-1:2017 Table 7: 3 < t <= 12, 3 to 2t
 	});
 	it('with no coupon thickness recorded it says so, and borrows no other code’s range', () => {
 		const found = of(revision('aws-d1.1', range), [pqr({}, null)], 'pqr-ranges');
@@ -91,9 +94,9 @@ describe('changes from the PQR by the procedure’s own code', () => {
 		expect(found[0]).toMatchObject({ status: 'caution' });
 		expect(found[0]!.message).toContain('No ISO 15614-1 rule modelled for this variable');
 	});
-	it('ISO 15614-1: short-circuit to spray needs its own test (8.4.1)', () => {
+	it('ISO 15614-1: short-circuit to spray needs its own test (8.5.2.3)', () => {
 		const v = revision('iso-15609-1', (x) => (x.electrical.transfer = 'spray'));
-		expect(of(v, [pqr()], 'pqr-code-rules')[0]).toMatchObject({ status: 'outside' }); // from memory
+		expect(of(v, [pqr()], 'pqr-code-rules')[0]).toMatchObject({ status: 'outside' }); // ISO 15614-1:2017+A1 8.5.2.3
 	});
 	it('D1.1 keeps its Table 4.5 triggers, as before', () => {
 		const v = revision('aws-d1.1', (x) => (x.electrical.volts = { min: 17, max: 23 }));

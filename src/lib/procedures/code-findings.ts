@@ -1,7 +1,7 @@
 // A revision against its PQRs judged by the revision's own governing code (issue 15):
-// - thickness from the coupon by D1.1 Table 4.2 or ISO 15614-1 Table 6 (ASME IX keeps QW-451.1
+// - thickness from the coupon by D1.1 Table 4.2 or ISO 15614-1 Table 7 (ASME IX keeps QW-451.1
 //   in findings.ts);
-// - changes from the PQR classed by ASME IX QW-255 / QW-256, or by ISO 15614-1 8.4;
+// - changes from the PQR classed by ASME IX QW-255 / QW-256, or by ISO 15614-1 8.4 / 8.5;
 // - where Beadline has no rule of that code, a finding that says so instead of another code's.
 import {
 	asmeChanges,
@@ -12,6 +12,8 @@ import {
 	type FindingSource,
 	type UnitSystem
 } from '$lib/weld';
+import { sourceOf } from '$lib/weld/findings';
+import { ISO_15614_1_2017 } from '$reference/sources';
 import type { Transfer } from '$reference/types';
 import type { RevisionVariables } from '$lib/schemas/procedure';
 import type { ProcedureFinding } from './findings';
@@ -37,7 +39,7 @@ export function codeThicknessFindings(
 	system: UnitSystem
 ): ProcedureFinding[] {
 	const code = v.code === 'aws-d1.1' ? 'aws-d1.1' : 'iso-15614-1';
-	const label = code === 'aws-d1.1' ? 'D1.1 Table 4.2' : 'ISO 15614-1 Table 6';
+	const label = code === 'aws-d1.1' ? 'D1.1 Table 4.2' : 'ISO 15614-1 Table 7';
 	const tr = v.baseMetals.thicknessMm;
 	if (tr.min === null && tr.max === null) return [];
 	const out: ProcedureFinding[] = [];
@@ -91,10 +93,7 @@ export function codeThicknessFindings(
 					...(r.maxMm === null ? {} : { max: conv(r.maxMm) }),
 					unit
 				},
-				source: r.source ?? {
-					label: 'ISO 15614-1 clause 8 (range of qualification)',
-					kind: 'from memory'
-				},
+				source: r.source ?? sourceOf(ISO_15614_1_2017),
 				at: 'thickness',
 				end,
 				pqr: p.number
@@ -136,7 +135,7 @@ export function codeChangeFindings(v: RevisionVariables, p: PqrWithCoupon): Proc
 			});
 		return out;
 	}
-	// ISO 15614-1: transfer is qualified as tested (8.4.1); amps and volts alone have no range.
+	// ISO 15614-1: transfer is qualified as tested (8.5.2.3); amps and volts alone have no range.
 	const t = num(v.electrical.transfer);
 	if (
 		q.transfer &&
@@ -147,10 +146,10 @@ export function codeChangeFindings(v: RevisionVariables, p: PqrWithCoupon): Proc
 		out.push({
 			check: 'pqr-code-rules',
 			status: 'outside',
-			message: `${p.number}: welded with ${q.transfer} transfer; ${t} needs its own test (ISO 15614-1 8.4.1: short-circuit qualifies short-circuit only).`,
+			message: `${p.number}: welded with ${q.transfer} transfer; ${t} needs its own test (ISO 15614-1 8.5.2.3: short-circuit qualifies short-circuit only).`,
 			value: t,
 			expected: { unit: q.transfer },
-			source: { label: 'ISO 15614-1 clause 8 (range of qualification)', kind: 'from memory' },
+			source: sourceOf(ISO_15614_1_2017),
 			at: 'transfer',
 			pqr: p.number
 		});

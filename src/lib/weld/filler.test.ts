@@ -57,7 +57,9 @@ describe('other specifications', () => {
 			fNumber: 6,
 			family: 'low-alloy'
 		}); // QW-432: A5.28 is F-6
-		expect(get('ER80S-B2')).toMatchObject({ minTensileKsi: 80, fNumber: 6, aNumber: 3 }); // from memory: A-3 Cr-Mo
+		// A-3 (Cr 0.40-2.00, Mo 0.40-0.65) for 1-1/4 Cr - 1/2 Mo: ISO 15614-1:2017 Table A.2 (the QW-442 ranges)
+		expect(get('ER80S-B2')).toMatchObject({ minTensileKsi: 80, fNumber: 6, aNumber: 3 });
+		expect(get('ER80S-B2').aNumberSource.kind).toBe('published');
 	});
 	it('A5.9 stainless: ER308L, ER309L, ER316L (L = low carbon)', () => {
 		for (const c of ['ER308L', 'ER309L', 'ER316L']) {
@@ -68,7 +70,7 @@ describe('other specifications', () => {
 				fNumber: 6,
 				aNumber: 8,
 				minTensileKsi: null
-			}); // QW-432 F-6; A-8
+			}); // QW-432 F-6; A-8 (Cr 14.50-30.00, Ni 7.50-15.00): ISO 15614-1:2017 Table A.2
 			expect(f.meaning).toContain('low carbon');
 		}
 		expect(get('ER308LSi').classification).toBe('ER308LSi');
@@ -104,9 +106,12 @@ describe('other specifications', () => {
 			minTensileKsi: 70,
 			fNumber: 4,
 			aNumber: 1
-		}); // from memory: QW-432 F-4
+		}); // F-4 for EXX18: ISO 15614-1:2017 Table A.1 (QW-432 groups); A-1 mild steel: Table A.2
 		expect(get('E7018-1 H4R').classification).toBe('E7018-1');
-		expect(get('E6010')).toMatchObject({ minTensileKsi: 60, fNumber: 3, currents: ['DCEP'] }); // from memory
+		// F-3 for EXX10: ISO 15614-1:2017 Table A.1; 6010 on DCEP (electrode positive): the
+		// electrode selection chart of a maker's stick welder operating manual (OM-267 212, 13-2/13-3).
+		expect(get('E6010')).toMatchObject({ minTensileKsi: 60, fNumber: 3, currents: ['DCEP'] });
+		expect(get('E6010').fNumberSource.kind).toBe('published');
 	});
 	it('malformed or empty input gets a clear message', () => {
 		for (const bad of [

@@ -1,8 +1,9 @@
 // AWS filler classifications: read the designation, say what it encodes.
 import {
+	A5_1_A_NUMBER_SOURCE,
 	A5_1_F_NUMBER,
-	A5_1_F_NUMBER_SOURCE,
 	A5_20_USABILITY,
+	a5_1FNumberSource,
 	FILLERS,
 	type FillerRow
 } from '$reference/fillers';
@@ -150,8 +151,8 @@ function covered(tensile: string, usability: string, suffix: string, raw: string
 			...(currents ? { currents } : {}),
 			inTable: true,
 			source: AWS_A5_CLASSIFICATION,
-			fNumberSource: A5_1_F_NUMBER_SOURCE,
-			aNumberSource: ASME_IX_QW_442_MEMORY
+			fNumberSource: a5_1FNumberSource(usability),
+			aNumberSource: A5_1_A_NUMBER_SOURCE
 		}
 	};
 }

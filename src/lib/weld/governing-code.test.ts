@@ -28,13 +28,13 @@ describe('each procedure is judged by its own code', () => {
 });
 
 describe('the thickness a 6 mm short-circuit GMAW coupon qualifies, code by code', () => {
-	it('ASME IX: QW-403.10 1.1T (from memory); D1.1: Table 4.2 1/8 in to 2T; ISO: Table 6 3 to 2t', () => {
+	it('ASME IX: QW-403.10 1.1T; D1.1: Table 4.2 1/8 in to 2T; ISO: Table 7 3 to 2t', () => {
 		const asme = thicknessByCode('asme-ix', 6, { transfer: 'short-circuit' });
 		const d11 = thicknessByCode('aws-d1.1', 6, { transfer: 'short-circuit' });
 		const iso = thicknessByCode('iso-15614-1', 6);
-		expect(asme).toMatchObject({ ok: true, minMm: 1.5, maxMm: 6.6 }); // QW-451.1 / QW-403.10 // from memory
+		expect(asme).toMatchObject({ ok: true, minMm: 1.5, maxMm: 6.6 }); // QW-451.1 1/16 in (1.5 mm); QW-403.10 1.1T (API RP 577 11.3)
 		expect(d11).toMatchObject({ ok: true, minMm: 3.175, maxMm: 12 }); // D1.1 Table 4.2, 1/8 in = 3.175 mm // from memory
-		expect(iso).toMatchObject({ ok: true, minMm: 3, maxMm: 12 }); // ISO 15614-1 Table 6 // from memory
+		expect(iso).toMatchObject({ ok: true, minMm: 3, maxMm: 12 }); // ISO 15614-1:2017 Table 7: 3 < t <= 12, 3 to 2t
 		expect(d11.ok && d11.rule).not.toContain('QW');
 	});
 	it('shop practice has no thickness rule and says so', () => {

@@ -95,18 +95,18 @@ const RULES: Record<Exclude<GoverningCode, 'shop'>, Partial<Record<CodeVariable,
 		volts: 'Table 4.5: voltage beyond 7 % (GMAW, FCAW)'
 	},
 	'iso-15614-1': {
-		thickness: '8.3.2.1, Table 6',
-		diameter: '8.3.2.2, Table 7',
+		thickness: '8.3.2, Table 7',
+		diameter: '8.3.3, Table 9',
 		positions: '8.4.2',
 		process: '8.4.1',
 		currentType: '8.4.6',
-		transfer: '8.4.1 (metal transfer)',
+		transfer: '8.5.2.3 (metal transfer)',
 		heatInput: '8.4.7',
-		gas: '8.4.5',
+		gas: '8.5.2.1 / 8.5.3.1',
 		filler: '8.4.4',
 		preheat: '8.4.8 (and interpass 8.4.9)',
-		pwht: '8.4.10',
-		baseMetal: '8.3.1.1 (ISO/TR 15608 groups)'
+		pwht: '8.4.11',
+		baseMetal: '8.3.1, Table 5 (ISO/TR 15608 groups)'
 	}
 };
 
@@ -207,8 +207,9 @@ export function thicknessByCode(
 				code: c,
 				minMm: r.min,
 				maxMm: r.max,
-				rule: 'ISO 15614-1 Table 6',
-				notes: r.notes
+				rule: 'ISO 15614-1 Table 7',
+				notes: r.notes,
+				source: r.source
 			};
 		}
 	} catch {

@@ -1,6 +1,6 @@
 // ISO 15614-1: every range one test coupon qualifies, each with its clause, from the rules in
 // iso-15614-ranges.ts. Pure; never throws.
-import { ISO_15614_1_DIAMETER } from '$reference/iso-15614-1';
+import { ISO_15614_1_DIAMETER, ISO_15614_1_TEMPERATURE } from '$reference/iso-15614-1';
 import { ISO_POSITIONS, type IsoPosition } from '$reference/iso-6947';
 import { ISO_15614_1_LEVELS, ISO_TR_15608 } from '$reference/sources';
 import { isNum, sourceOf, type FindingSource } from './findings';
@@ -64,7 +64,7 @@ export function isoProcedureRanges(input: unknown): {
 			const mig = /^13[1-8]$/.test(p);
 			items.push({
 				variable: 'Process',
-				clause: '8.4.1',
+				clause: mig && t ? '8.4.1; transfer 8.5.2.3' : '8.4.1',
 				qualified: `${p} only${mig && t ? (t === 'short-circuit' ? ', short-circuit transfer only' : ', spray, pulsed or globular transfer (not short-circuit)') : ''}`,
 				notes: [],
 				source: SRC
@@ -76,7 +76,7 @@ export function isoProcedureRanges(input: unknown): {
 			if (th.ok)
 				items.push({
 					variable: 'Parent material thickness',
-					clause: '8.3.2.1, Table 6',
+					clause: '8.3.2, Table 7',
 					qualified: `${th.min}${th.max === null ? ' mm and over' : `–${th.max} mm`}`,
 					range: { min: th.min, max: th.max, unit: 'mm' },
 					notes: [
@@ -85,7 +85,7 @@ export function isoProcedureRanges(input: unknown): {
 							: '',
 						...th.notes
 					].filter(Boolean),
-					source: SRC
+					source: th.source
 				});
 		}
 		if (isNum(c.outsideDiameterMm)) {
@@ -93,7 +93,7 @@ export function isoProcedureRanges(input: unknown): {
 			if (d.ok)
 				items.push({
 					variable: 'Pipe outside diameter',
-					clause: '8.3.2.2, Table 7',
+					clause: '8.3.3, Table 9',
 					qualified: `${d.min}${d.max === null ? ' mm and over' : `–${d.max} mm`}`,
 					range: { min: d.min, max: d.max, unit: 'mm' },
 					notes: [],
@@ -102,8 +102,8 @@ export function isoProcedureRanges(input: unknown): {
 		} else if (c.joint === 'butt-plate')
 			items.push({
 				variable: 'Pipe outside diameter',
-				clause: '8.3.2.2',
-				qualified: `pipe over ${ISO_15614_1_DIAMETER.plateQualifiesPipeOverMm} mm OD (over ${ISO_15614_1_DIAMETER.plateRotatedQualifiesPipeOverMm} mm when welded rotated in PA or PC)`,
+				clause: '8.3.3',
+				qualified: `pipe over ${ISO_15614_1_DIAMETER.plateQualifiesPipeOverMm} mm OD (over ${ISO_15614_1_DIAMETER.plateRotatedQualifiesPipeOverMm} mm when welded in PC, or rotated in PA or PF)`,
 				range: { min: ISO_15614_1_DIAMETER.plateQualifiesPipeOverMm, max: null, unit: 'mm' },
 				notes: [],
 				source: SRC
@@ -112,7 +112,7 @@ export function isoProcedureRanges(input: unknown): {
 			const g = isoMaterialGroups(c.materialGroup);
 			items.push({
 				variable: 'Parent material group (ISO/TR 15608)',
-				clause: '8.3.1.1, Table 3',
+				clause: '8.3.1, Table 5',
 				qualified: g.known
 					? g.qualified.join(', ')
 					: `${g.qualified.join(', ')} only (group not in Beadline's ISO/TR 15608 list)`,
@@ -150,7 +150,7 @@ export function isoProcedureRanges(input: unknown): {
 					: strict
 						? `${p}; all positions only when impact specimens come from the highest and hardness from the lowest heat-input position`
 						: 'all positions (no impact or hardness requirements)',
-				notes: ['Vertical-down positions (PG, PJ, J-L045): confirm in 8.4.2; not modelled.'],
+				notes: ['Vertical-down positions (PG, PJ, J-L045) need a test piece of their own (8.4.2).'],
 				source: SRC
 			});
 		}
@@ -161,14 +161,19 @@ export function isoProcedureRanges(input: unknown): {
 				variable: 'Filler material',
 				clause: '8.4.4',
 				qualified: `${c.filler.designation.trim().slice(0, 40)} and fillers of equivalent mechanical properties, the same type of covering, core or flux, the same nominal composition and the same or lower hydrogen${c.impact === true && c.filler.make ? `; with impact requirements, the make tested (${c.filler.make.slice(0, 40)})` : ''}`,
-				notes: [],
+				notes:
+					c.impact === true && c.filler.make
+						? [
+								'8.4.4 restricts the make for impact tests below −20 °C with processes 111, 114, 12, 136 and 132; Beadline asks it for every impact test.'
+							]
+						: [],
 				source: SRC
 			});
 		if (typeof c.gas === 'string' && c.gas.trim())
 			items.push({
 				variable: 'Shielding gas (ISO 14175)',
-				clause: '8.4.5',
-				qualified: `${c.gas.trim().slice(0, 20)} (the designation used in the test)`,
+				clause: '8.5.2.1 (process 13), 8.5.3.1 (process 14)',
+				qualified: `${c.gas.trim().slice(0, 20)} (the nominal composition used in the test)`,
 				notes: [],
 				source: SRC
 			});
@@ -182,27 +187,44 @@ export function isoProcedureRanges(input: unknown): {
 				source: SRC
 			});
 		}
-		if (isNum(c.preheatC) && c.preheatC > -60 && c.preheatC < 1000)
+		const temp = ISO_15614_1_TEMPERATURE;
+		if (isNum(c.preheatC) && c.preheatC > -60 && c.preheatC < 1000) {
+			const tested = Math.round(c.preheatC);
+			const min = tested - temp.preheatDropC;
 			items.push({
 				variable: 'Preheat',
 				clause: '8.4.8',
-				qualified: `at least ${Math.round(c.preheatC)} °C (the preheat at the start of the test)`,
-				range: { min: Math.round(c.preheatC), max: null, unit: 'degC' },
-				notes: [],
+				qualified: `at least ${min} °C (${tested} °C tested, less ${temp.preheatDropC} °C)`,
+				range: { min, max: null, unit: 'degC' },
+				notes: [
+					`A preheat below ${tested} °C is allowed only where the preheat rules for the joint (e.g. ISO/TR 17671-2, combined thickness) are met.`
+				],
 				source: SRC
 			});
-		if (isNum(c.interpassMaxC) && c.interpassMaxC > -60 && c.interpassMaxC < 1000)
+		}
+		if (isNum(c.interpassMaxC) && c.interpassMaxC > -60 && c.interpassMaxC < 1000) {
+			const tested = Math.round(c.interpassMaxC);
+			const g = typeof c.materialGroup === 'string' ? c.materialGroup.trim().split('.')[0] : '';
+			const asTested =
+				level === 2 && (temp.interpassAsTestedGroups as readonly string[]).includes(g ?? '');
 			items.push({
 				variable: 'Interpass temperature',
 				clause: '8.4.9',
-				qualified: `at most ${Math.round(c.interpassMaxC)} °C (the highest reached in the test)`,
-				notes: [],
+				qualified: asTested
+					? `at most ${tested} °C (the highest reached in the test; group ${g}, level 2)`
+					: `at most ${tested + temp.interpassRiseC} °C (${tested} °C reached in the test, plus ${temp.interpassRiseC} °C)`,
+				notes: asTested
+					? []
+					: [
+							'For ISO/TR 15608 groups 8, 10 and 41 to 48 at level 2, the limit is the highest reached in the test.'
+						],
 				source: SRC
 			});
+		}
 		if (typeof c.pwht === 'boolean')
 			items.push({
 				variable: 'Post-weld heat treatment',
-				clause: '8.4.10',
+				clause: '8.4.11',
 				qualified: c.pwht
 					? 'the heat treatment tested'
 					: 'no heat treatment (adding one needs a new test)',

@@ -1,6 +1,6 @@
 // ISO 15614-1 ranges of qualification from one test coupon (clause 8). Pure; never throws; a
-// range it gives is never empty or inverted. Rows are recalled (see the source): the standard
-// the contract names decides.
+// range it gives is never empty or inverted. Rows carry their source (read from the 2017 and
+// 2017+A1:2019 texts): the standard the contract names decides.
 import {
 	ISO_15614_1_DIAMETER,
 	ISO_15614_1_HEAT_INPUT,
@@ -9,7 +9,7 @@ import {
 	ISO_TR_15608_GROUPS,
 	type IsoLimit
 } from '$reference/iso-15614-1';
-import { ISO_15614_1_RANGES } from '$reference/sources';
+import { ISO_15614_1_2017 } from '$reference/sources';
 import type { CurrentType, Transfer } from '$reference/types';
 import { isNum, sourceOf, type FindingSource } from './findings';
 
@@ -60,7 +60,7 @@ export interface IsoRangeItem {
 	source: FindingSource;
 }
 
-export const ISO_15614_SOURCE = sourceOf(ISO_15614_1_RANGES);
+export const ISO_15614_SOURCE = sourceOf(ISO_15614_1_2017);
 const r2 = (n: number): number => Math.round(n * 100) / 100;
 const EPS = 1e-9;
 
@@ -82,11 +82,13 @@ function ordered(min: number, max: number | null, test: number): MmRange {
 	return { min: lo, max: hi };
 }
 
-/** Butt-weld parent material thickness (2017 Table 6, level 2 column; 2004 Table 5). */
+/** Butt-weld parent material thickness (2017 8.3.2, Table 7, level 2 columns). */
 export function isoThicknessRange(
 	thicknessMm: unknown,
 	runs: unknown = 'multi'
-): ({ ok: true; notes: string[] } & MmRange) | { ok: false; message: string } {
+):
+	| ({ ok: true; notes: string[]; source: FindingSource } & MmRange)
+	| { ok: false; message: string } {
 	if (!isNum(thicknessMm) || thicknessMm <= 0 || thicknessMm > 2000)
 		return { ok: false, message: 'Give the test piece thickness t in mm, above zero.' };
 	const t = thicknessMm;
@@ -96,22 +98,27 @@ export function isoThicknessRange(
 	let band = row.multiRun;
 	if (runs === 'single') {
 		if (row.singleRun) band = row.singleRun;
-		else notes.push('Single-run welding over 100 mm is not covered; the multi-run row is shown.');
+		else
+			notes.push(
+				'Single-run welding over 40 mm is not covered by Table 7; the multi-run row is shown.'
+			);
 	}
 	const min = limit(band.min, t) ?? t;
-	return { ok: true, ...ordered(min, limit(band.max, t), t), notes };
+	return {
+		ok: true,
+		...ordered(min, limit(band.max, t), t),
+		notes,
+		source: sourceOf(row.source)
+	};
 }
 
-/** Pipe outside diameter (2017 Table 7; 2004 Table 6). */
+/** Pipe outside diameter (2017 8.3.3, Table 9, level 2): 0.5D and over. */
 export function isoDiameterRange(
 	odMm: unknown
 ): ({ ok: true } & MmRange) | { ok: false; message: string } {
 	if (!isNum(odMm) || odMm <= 0 || odMm > 20_000)
 		return { ok: false, message: 'Give the pipe outside diameter D in mm, above zero.' };
-	const d = ISO_15614_1_DIAMETER;
-	if (odMm <= d.smallUpToMm + EPS)
-		return { ok: true, ...ordered(d.small.minTimesD * odMm, d.small.maxTimesD * odMm, odMm) };
-	return { ok: true, ...ordered(Math.max(d.large.minTimesD * odMm, d.large.minMm), null, odMm) };
+	return { ok: true, ...ordered(ISO_15614_1_DIAMETER.minTimesD * odMm, null, odMm) };
 }
 
 /** Heat input: upper +25 % with impact requirements, lower -25 % with hardness requirements. */

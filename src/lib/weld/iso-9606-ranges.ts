@@ -1,10 +1,11 @@
 // ISO 9606-1:2012 welder ranges of qualification (clause 5), in the standard's own terms. Pure;
-// never throws; ranges never empty or inverted. Rows recalled: the standard decides.
+// never throws; ranges never empty or inverted. Rows read from the text (reference/sources.ts
+// ISO_9606_1_2012); the standard the contract names decides.
 import {
 	DIAMETER,
 	FILLER_GROUPS,
-	FILLER_GROUP_PARENT,
 	FILLER_GROUP_QUALIFIES,
+	PARENT_GROUPS_QUALIFIED,
 	POSITIONS_BUTT,
 	POSITIONS_FILLET,
 	PROCESS_ALSO,
@@ -14,16 +15,24 @@ import {
 	type FillerGroup
 } from '$reference/iso-9606-1';
 import { ASME_TO_ISO, ISO_POSITIONS, type IsoPosition } from '$reference/iso-6947';
-import { ISO_9606_1_FILLET_SUPPLEMENT, ISO_9606_1_RANGES } from '$reference/sources';
+import {
+	ISO_9606_1_2012,
+	ISO_9606_1_FILLET_SUPPLEMENT,
+	ISO_9606_1_RANGES
+} from '$reference/sources';
 import { isNum, sourceOf, type FindingSource } from './findings';
 import type { MmRange } from './iso-15614-ranges';
 
 const EPS = 1e-9;
-const SRC = sourceOf(ISO_9606_1_RANGES);
+const SRC = sourceOf(ISO_9606_1_2012);
 
 type Fail = { ok: false; message: string };
 
-/** Table 9 (butt): t < 3: t to 2t; 3 <= t <= 12: 3 to 2t; t > 12: 5 mm and over. */
+/**
+ * Table 6 (butt, deposited thickness = t for one process): t < 3: t to 3 or 2t, whichever is
+ * greater; 3 <= t < 12: 3 to 2t; t >= 12: 3 mm and over. Table 8 (fillet): t < 3: t to 2t or 3,
+ * whichever is greater; t >= 3: 3 mm and over.
+ */
 export function welderThicknessIso(
 	t: unknown,
 	weld: unknown = 'butt'
@@ -33,16 +42,16 @@ export function welderThicknessIso(
 	if (weld === 'fillet') {
 		const f = THICKNESS_FILLET;
 		return t < f.below - EPS
-			? { ok: true, min: t, max: Math.max(f.maxBelowMm, t) }
+			? { ok: true, min: t, max: Math.max(f.maxAtLeastMm, 2 * t) }
 			: { ok: true, min: f.minAtOrOverMm, max: null };
 	}
 	const b = THICKNESS_BUTT;
-	if (t < b.thinBelow - EPS) return { ok: true, min: t, max: 2 * t };
-	if (t <= b.midUpTo + EPS) return { ok: true, min: b.midMinMm, max: Math.max(2 * t, 3) };
-	return { ok: true, min: b.thickMinMm, max: null };
+	if (t < b.thinBelow - EPS) return { ok: true, min: t, max: Math.max(2 * t, b.minMm) };
+	if (t < b.thickFrom - EPS) return { ok: true, min: b.minMm, max: 2 * t };
+	return { ok: true, min: b.minMm, max: null };
 }
 
-/** Table 11: D <= 25 mm: D to 2D; D > 25 mm: 0.5D and over, 25 mm at least. */
+/** Table 7: D <= 25 mm: D to 2D; D > 25 mm: 0.5D and over, 25 mm at least. */
 export function welderDiameterIso(d: unknown): ({ ok: true } & MmRange) | Fail {
 	if (!isNum(d) || d <= 0 || d > 20_000)
 		return { ok: false, message: 'Give the pipe outside diameter D in mm, above zero.' };
@@ -53,7 +62,7 @@ export function welderDiameterIso(d: unknown): ({ ok: true } & MmRange) | Fail {
 const isPos = (p: unknown): p is IsoPosition =>
 	typeof p === 'string' && (ISO_POSITIONS as readonly string[]).includes(p.trim().toUpperCase());
 
-/** Tables 12 and 13: positions qualified by the test positions (their union). */
+/** Tables 9 (butt) and 10 (fillet): positions qualified by the test positions (their union). */
 export function welderPositionsIso(
 	tests: unknown,
 	weld: unknown = 'butt'
@@ -61,6 +70,7 @@ export function welderPositionsIso(
 	const table = weld === 'fillet' ? POSITIONS_FILLET : POSITIONS_BUTT;
 	const set = new Set<IsoPosition>();
 	const unknown: string[] = [];
+	let reading = false;
 	for (const t of Array.isArray(tests) ? tests.slice(0, 20) : [tests]) {
 		const k = typeof t === 'string' ? t.trim().toUpperCase() : '';
 		const row = isPos(k) ? table[k as IsoPosition] : undefined;
@@ -68,23 +78,28 @@ export function welderPositionsIso(
 			unknown.push(typeof t === 'string' ? t.slice(0, 10) : '?');
 			continue;
 		}
+		// H-L045 / J-L045 add PH / PJ by Beadline's reading, not by a column of Table 9.
+		if (weld !== 'fillet' && k.endsWith('-L045')) reading = true;
 		row.forEach((p) => set.add(p));
 	}
-	return { qualified: ISO_POSITIONS.filter((p) => set.has(p)), unknown, source: SRC };
+	return {
+		qualified: ISO_POSITIONS.filter((p) => set.has(p)),
+		unknown,
+		source: reading ? sourceOf(ISO_9606_1_RANGES) : SRC
+	};
 }
 
 const isFm = (g: unknown): g is FillerGroup =>
 	typeof g === 'string' && (FILLER_GROUPS as readonly string[]).includes(g.trim().toUpperCase());
 
-/** Table 4: filler groups covered; Table 2: the parent material groups they are used for. */
+/** Table 3: filler groups covered; 5.5.2: parent material groups 1 to 11 with any of them. */
 export function welderFillerGroupsIso(
 	group: unknown
 ): { ok: true; fillers: FillerGroup[]; parentGroups: string[] } | Fail {
 	if (!isFm(group)) return { ok: false, message: 'Give the filler group FM1 to FM6.' };
 	const g = group.trim().toUpperCase() as FillerGroup;
 	const fillers = [...FILLER_GROUP_QUALIFIES[g]];
-	const parentGroups = [...new Set(fillers.flatMap((f) => FILLER_GROUP_PARENT[f]))];
-	return { ok: true, fillers, parentGroups };
+	return { ok: true, fillers, parentGroups: [...PARENT_GROUPS_QUALIFIED] };
 }
 
 export interface IsoWelderTest {
@@ -135,7 +150,7 @@ export function isoWelderRanges(input: unknown): { items: IsoWelderItem[]; sourc
 				clause: '5.3',
 				qualified:
 					t.product === 'plate'
-						? `plate, and pipe over ${t.rotated ? PRODUCT.plateRotatedToPipeOverMm : PRODUCT.plateToPipeOverMm} mm OD${t.rotated ? ' welded rotated (PA or PC)' : ''}`
+						? `plate, and pipe over ${t.rotated ? PRODUCT.plateRotatedToPipeOverMm : PRODUCT.plateToPipeOverMm} mm OD${t.rotated ? ' welded rotated (PA, PB, PC or PD)' : ''}`
 						: `pipe, and plate when the pipe is over ${PRODUCT.pipeToPlateOverMm} mm OD`,
 				source: SRC
 			});
@@ -154,14 +169,14 @@ export function isoWelderRanges(input: unknown): { items: IsoWelderItem[]; sourc
 		if (fm.ok) {
 			items.push({
 				variable: 'Filler material group',
-				clause: '5.6, Table 4',
+				clause: '5.5, Table 3',
 				qualified: fm.fillers.join(', '),
 				source: SRC
 			});
 			items.push({
 				variable: 'Parent material group (ISO/TR 15608)',
-				clause: '5.5, Table 2',
-				qualified: `${fm.parentGroups.join(', ')}${typeof t.materialGroup === 'string' && t.materialGroup.trim() ? ` (tested on ${t.materialGroup.trim().slice(0, 10)})` : ''}`,
+				clause: '5.5.2',
+				qualified: `groups ${fm.parentGroups[0]} to ${fm.parentGroups.at(-1)}${typeof t.materialGroup === 'string' && t.materialGroup.trim() ? ` (tested on ${t.materialGroup.trim().slice(0, 10)})` : ''}`,
 				source: SRC
 			});
 		}
@@ -170,7 +185,7 @@ export function isoWelderRanges(input: unknown): { items: IsoWelderItem[]; sourc
 			if (r.ok)
 				items.push({
 					variable: 'Material thickness',
-					clause: weld === 'fillet' ? '5.7, Table 10' : '5.7, Table 9',
+					clause: weld === 'fillet' ? '5.7, Table 8' : '5.7, Table 6',
 					qualified: mm(r),
 					range: { ...r, unit: 'mm' },
 					source: SRC
@@ -181,7 +196,7 @@ export function isoWelderRanges(input: unknown): { items: IsoWelderItem[]; sourc
 			if (r.ok)
 				items.push({
 					variable: 'Outside pipe diameter',
-					clause: '5.7, Table 11',
+					clause: '5.7, Table 7',
 					qualified: mm(r),
 					range: { ...r, unit: 'mm' },
 					source: SRC
@@ -191,14 +206,14 @@ export function isoWelderRanges(input: unknown): { items: IsoWelderItem[]; sourc
 			const p = welderPositionsIso(t.positions, weld);
 			items.push({
 				variable: 'Welding positions (ISO 6947)',
-				clause: weld === 'fillet' ? '5.8, Table 13' : '5.8, Table 12',
+				clause: weld === 'fillet' ? '5.8, Table 10' : '5.8, Table 9',
 				qualified: [
 					p.qualified.join(', ') || 'none',
 					p.unknown.length ? `(not in the table: ${p.unknown.join(', ')})` : ''
 				]
 					.filter(Boolean)
 					.join(' '),
-				source: SRC
+				source: p.source
 			});
 		}
 	} catch {

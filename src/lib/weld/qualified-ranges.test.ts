@@ -63,15 +63,16 @@ describe('QW-451.1 in mm uses the code’s metric values', () => {
 });
 
 describe('QW-451.1 exceptions and bad input', () => {
-	it('GMAW short-circuit under 1/2 in: 1.1T (QW-403.10, from memory)', () => {
+	// QW-403.10 / QW-404.32: 1.1 times the coupon (deposit) under 1/2 in, as stated in API RP 577 11.3.
+	it('GMAW short-circuit under 1/2 in: 1.1T (QW-403.10) and 1.1t (QW-404.32)', () => {
 		const r = pqrThicknessRange(
 			{ value: 0.25, unit: 'in' },
 			{ value: 0.25, unit: 'in' },
 			'short-circuit'
 		);
-		expect(r.ok && r.baseMetal.max.value).toBe(0.275);
-		expect(r.ok && r.depositedMax?.value).toBe(0.275);
-		expect(r.ok && r.source.kind).toBe('from memory');
+		expect(r.ok && r.baseMetal.max.value).toBe(0.275); // 1.1 x 0.25 in, QW-403.10 (API RP 577 11.3)
+		expect(r.ok && r.depositedMax?.value).toBe(0.275); // 1.1 x 0.25 in, QW-404.32 (API RP 577 11.3)
+		expect(r.ok && r.source.kind).toBe('published');
 	});
 	it('refuses non-lengths', () => {
 		for (const bad of [

@@ -59,7 +59,7 @@ export type PqrRangesResult = ({ ok: true } & PqrRanges) | { ok: false; message:
  * QW-451.1 ranges for a groove-weld PQR. The row is chosen with the edges of the unit system the
  * coupon thickness was given in; fixed limits use the code's own value in that system (3/16 in or
  * 5 mm). The deposit answer is in the deposit's unit. Short-circuit GMAW under 1/2 in (13 mm)
- * takes the QW-403.10 / QW-404.32 1.1 limits (recalled, marked in the notes).
+ * takes the QW-403.10 / QW-404.32 1.1 limits (as stated in API RP 577 11.3; named in the notes).
  */
 export function pqrThicknessRange(
 	coupon: unknown,
@@ -83,9 +83,7 @@ export function pqrThicknessRange(
 	const shortCircuit = transfer === 'short-circuit' && lengthToMm(T, unit) < 13 - EPS;
 	if (shortCircuit) {
 		max = 1.1 * T;
-		notes.push(
-			'GMAW short-circuit, coupon under 1/2 in (13 mm): maximum 1.1T (QW-403.10, from memory; verify).'
-		);
+		notes.push('GMAW short-circuit, coupon under 1/2 in (13 mm): maximum 1.1T (QW-403.10).');
 	}
 	if (min > max) min = max;
 	const result: PqrRanges = {
@@ -107,9 +105,7 @@ export function pqrThicknessRange(
 			dmax = 'fixed' in col ? col.fixed[du] : mmToLength(lengthToMm(col.timesT * T, unit), du);
 		if (shortCircuit && lengthToMm(t, du) < 13 - EPS) {
 			dmax = 1.1 * t;
-			notes.push(
-				'GMAW short-circuit, deposit under 1/2 in (13 mm): maximum 1.1t (QW-404.32, from memory; verify).'
-			);
+			notes.push('GMAW short-circuit, deposit under 1/2 in (13 mm): maximum 1.1t (QW-404.32).');
 		}
 		result.depositedMax = { value: tidy(dmax, du), unit: du };
 	}

@@ -3,7 +3,7 @@ import { withIso6947 } from '$lib/weld/iso-9606-ranges';
 import { isoRangesFor } from './iso-ranges';
 import { qualifiedRanges } from './ranges';
 
-// An ISO 9606-1 WPQ shown in its own terms (ISO 9606-1:2012 clause 5; rows from memory).
+// An ISO 9606-1 WPQ shown in its own terms (ISO 9606-1:2012 clause 5, read from the text).
 describe('ISO 9606-1 qualifications in their own terms', () => {
 	const facts = {
 		code: 'ISO 9606-1',
@@ -20,9 +20,10 @@ describe('ISO 9606-1 qualifications in their own terms', () => {
 	it('lists process, product, weld type, thickness and positions with their clauses', () => {
 		const r = qualifiedRanges(facts);
 		const by = Object.fromEntries((r.iso ?? []).map((i) => [i.variable, i.qualified]));
-		expect(by['Process']).toBe('135 and 138'); // 5.2 // from memory
-		expect(by['Material thickness']).toBe('3–20 mm'); // Table 9 // from memory
-		expect(by['Welding positions (ISO 6947)']).toBe('PA, PF'); // 3G read as PF, Table 12 // from memory
+		expect(by['Process']).toBe('135 and 138'); // ISO 9606-1:2012 5.2
+		expect(by['Material thickness']).toBe('3–20 mm'); // 3 to 2t, ISO 9606-1:2012 Table 6
+		// PF qualifies PA, PF (ISO 9606-1:2012 Table 9); 3G read as PF is the ISO 6947 reading // from memory
+		expect(by['Welding positions (ISO 6947)']).toBe('PA, PF');
 		expect(r.codeNote).toContain('for comparison');
 	});
 	it('gives nothing in ISO terms for an ASME IX qualification', () => {

@@ -76,7 +76,7 @@ describe('POST /api/v1/checks/pqr-ranges with a code', () => {
 		const b = await (await call(pqrRanges, { ...coupon, code: 'asme-ix' })).json();
 		expect(b).toEqual(a);
 	});
-	it('ISO 15614-1: 3 to 2t for a 10 mm multi-run coupon (Table 6) // from memory', async () => {
+	it('ISO 15614-1: 3 to 2t for a 10 mm multi-run coupon (ISO 15614-1:2017 Table 7)', async () => {
 		const r = await (await call(pqrRanges, { ...coupon, code: 'iso-15614-1' })).json();
 		expect(r.baseMetal).toEqual({ min: { value: 3, unit: 'mm' }, max: { value: 20, unit: 'mm' } });
 		expect(r.row).toContain('ISO 15614-1');
@@ -107,7 +107,7 @@ describe('POST /api/v1/checks/welder-positions with a code', () => {
 		).json();
 		expect(b).toEqual(a);
 	});
-	it('ISO 9606-1: PF butt qualifies PA and PF (Table 12) // from memory', async () => {
+	it('ISO 9606-1: PF butt qualifies PA and PF (ISO 9606-1:2012 Table 9)', async () => {
 		const r = await (
 			await call(welderPositions, { testPositions: ['PF'], code: 'ISO 9606-1' })
 		).json();
