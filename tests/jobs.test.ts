@@ -1,7 +1,7 @@
 // A job from opening to its joint list: the engineer opens it, pastes a list with mistakes
 // (every line named, nothing added), fixes it and adds it whole; a welder can read it.
 import { expect, test } from '@playwright/test';
-import { engineer, signIn, welder } from './support/people';
+import { engineer, inspector, signIn, welder } from './support/people';
 import { uniqueNumber } from './support/procedures';
 
 test.describe.configure({ timeout: 90_000 });
@@ -75,4 +75,35 @@ test('a welder logs passes on a joint; an unqualified position is refused in wor
 		'Tomas Whitlow may not weld W5 to WPS-002 rev 1: not qualified for fillet V'
 	);
 	await expect(w5.getByTestId('weld-logs')).toHaveCount(0);
+});
+
+test('an inspector signs an override with a reason; the refused welder may then log', async ({
+	page,
+	browser
+}) => {
+	await signIn(page, inspector);
+	await page.goto('/jobs');
+	await page.getByRole('link', { name: 'JOB-2026-014' }).click();
+	const form = page.getByTestId('override-form');
+	await form.getByLabel('Joint').selectOption({ label: 'W5' });
+	await form.getByLabel('Welder').selectOption({ label: 'LTR-07 Tomas Whitlow' });
+	await form.getByLabel('Reason').fill('3F coupon witnessed today; WPQ paperwork to follow.');
+	await form.getByLabel(/Your password/).fill('not my password');
+	await form.getByRole('button', { name: 'Sign the override' }).click();
+	await expect(form).toContainText('That password is not right. Nothing was signed.');
+	await form.getByLabel(/Your password/).fill(inspector.password);
+	await form.getByRole('button', { name: 'Sign the override' }).click();
+	await expect(form).toContainText('Override signed.');
+	const w5 = page.locator('[data-testid="joint-row"][data-mark="W5"]');
+	await expect(w5.getByTestId('override')).toContainText('signed by Mirela Sand (Inspector)');
+	await expect(w5.getByTestId('override')).toContainText('not qualified for fillet V');
+
+	const w = await (await browser.newContext()).newPage();
+	await signIn(w, welder);
+	await w.goto(new URL(page.url()).pathname);
+	const row = w.locator('[data-testid="joint-row"][data-mark="W5"]');
+	await row.getByLabel('Root').check();
+	await row.getByRole('button', { name: 'Welded by me today' }).click();
+	await expect(row.getByTestId('weld-logs')).toContainText('Root: LTR-07 Tomas Whitlow');
+	await expect(row.getByTestId('weld-logs')).toContainText('(under override)');
 });

@@ -137,6 +137,7 @@ export const ACCESS_RULES: Record<string, Access> = {
 	'POST /jobs/[id=id]?/addJoint': roles(AUTHOR),
 	'POST /jobs/[id=id]?/importJoints': roles(AUTHOR),
 	'POST /jobs/[id=id]?/log': roles(['welder']), // only the welder logs their own weld
+	'POST /jobs/[id=id]?/override': roles(REVIEW), // an inspector's signed override
 	'POST /jobs/new': roles(AUTHOR),
 	'POST /pqrs/[id=id]?/addendum': roles(AUTHOR),
 	'POST /pqrs/[id=id]?/certify': roles(CERTIFY),

@@ -28,8 +28,40 @@ export interface OverrideView {
 	digest: string;
 }
 
+export type JointStatus = 'open' | 'welded' | 'accepted' | 'rejected' | 'repaired';
+
+export interface InspectionView {
+	id: number;
+	/** The round examined: 0 the first weld, n the n-th repair. */
+	round: number;
+	method: string;
+	extent: string;
+	result: 'accept' | 'reject';
+	note: string | null;
+	printedName: string;
+	role: string;
+	signedAt: string;
+	digest: string;
+}
+
+export interface RepairView {
+	id: number;
+	round: number;
+	inspectionId: number;
+	revisionId: number;
+	procedureLabel: string;
+	welderName: string;
+	stamp: string;
+	note: string | null;
+	recordedByName: string;
+	recordedAt: string;
+}
+
 export interface JointHistory {
 	round: number;
+	status: JointStatus;
+	inspections: InspectionView[];
+	repairs: RepairView[];
 	logs: LogView[];
 	overrides: OverrideView[];
 }

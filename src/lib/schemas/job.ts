@@ -93,3 +93,41 @@ export const overrideSchema = z.object({
 	password: z.string('Enter your password to sign.').min(1, 'Enter your password to sign.').max(200)
 });
 export type OverrideForm = z.infer<typeof overrideSchema>;
+
+export const INSPECTION_METHODS = ['VT', 'PT', 'MT', 'RT', 'UT'] as const;
+export const METHOD_WORDS: Record<(typeof INSPECTION_METHODS)[number], string> = {
+	VT: 'Visual (VT)',
+	PT: 'Liquid penetrant (PT)',
+	MT: 'Magnetic particle (MT)',
+	RT: 'Radiography (RT)',
+	UT: 'Ultrasonic (UT)'
+};
+export const INSPECTION_RESULTS = ['accept', 'reject'] as const;
+
+/** An examination of one joint, signed by the inspector. */
+export const inspectionSchema = z.object({
+	jointId: z.coerce.number('Pick the joint.').int().positive('Pick the joint.'),
+	method: z.enum(INSPECTION_METHODS, 'Pick the method.'),
+	extent: required(60, 'extent (e.g. 100 %, 10 % spot)'),
+	result: z.enum(INSPECTION_RESULTS, 'Pick accept or reject.'),
+	note: text(500),
+	password: z.string('Enter your password to sign.').min(1, 'Enter your password to sign.').max(200)
+});
+export type InspectionForm = z.infer<typeof inspectionSchema>;
+
+/** A rejected joint's repair: the procedure (and revision) it is repaired to, and the welder. */
+export const repairSchema = z.object({
+	jointId: z.coerce.number('Pick the joint.').int().positive('Pick the joint.'),
+	procedure: required(40, 'repair procedure number'),
+	rev: z
+		.string()
+		.trim()
+		.default('')
+		.refine(
+			(s) => s === '' || /^\d{1,4}$/.test(s),
+			'Give the revision as a number, or leave it empty.'
+		),
+	welderId: z.coerce.number('Pick the welder.').int().positive('Pick the welder.'),
+	note: text(500)
+});
+export type RepairForm = z.infer<typeof repairSchema>;

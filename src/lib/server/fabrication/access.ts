@@ -10,3 +10,5 @@ export const JOB_AUTHOR_ROLES: Role[] = ['admin', 'engineer'];
 export const WELD_ROLES: Role[] = ['welder'];
 /** Inspectors override a refusal and record inspections, signing each. */
 export const INSPECT_ROLES: Role[] = ['inspector'];
+/** A rejected joint's repair is opened by engineers and admins, or by the inspector. */
+export const REPAIR_ROLES: Role[] = ['admin', 'engineer', 'inspector'];

@@ -8,3 +8,5 @@ export type { JointView } from '$lib/jobs/types';
 export { jobList, type JobRow } from './list';
 export { findJoint, logWeld, NOT_A_WELDER, type LoggedWeld } from './weld-log';
 export { checkWeld, type WeldCheck } from './weld-check';
+export { recordOverride } from './override';
+export { signatureHolds } from './signing';

@@ -1,28 +1,63 @@
-// What happened to each joint: the passes logged (by whom, when, under an override or not) and
-// the overrides inspectors signed. Read for many joints at once (the job page, the data book).
+// What happened to each joint: the passes logged (by whom, when, under an override or not), the
+// overrides and inspections inspectors signed, and the repairs. Read for many joints at once (the
+// job page, the API, the data book); the status follows from it ($lib/jobs/status).
 import { Op } from 'sequelize';
-import { JointRepair, WeldLog, WeldOverride, Welder } from '../models';
+import { jointStatus } from '$lib/jobs/status';
 import type { JointHistory } from '$lib/jobs/types';
+import {
+	JointInspection,
+	JointRepair,
+	Procedure,
+	ProcedureRevision,
+	WeldLog,
+	WeldOverride,
+	Welder
+} from '../models';
+
+/** The round an inspection examined, as it signed it (older content without one: the first). */
+export function roundOf(canonical: string): number {
+	try {
+		const r = (JSON.parse(canonical) as { round?: unknown }).round;
+		return typeof r === 'number' ? r : 0;
+	} catch {
+		return 0;
+	}
+}
+
+async function labels(shopId: number, revisionIds: number[]): Promise<Map<number, string>> {
+	const out = new Map<number, string>();
+	if (!revisionIds.length) return out;
+	const revisions = await ProcedureRevision.findAll({
+		where: { shopId, id: { [Op.in]: revisionIds } }
+	});
+	const procedures = await Procedure.findAll({
+		where: { shopId, id: { [Op.in]: [...new Set(revisions.map((r) => r.procedureId))] } }
+	});
+	for (const r of revisions)
+		out.set(r.id, `${procedures.find((p) => p.id === r.procedureId)?.number ?? '?'} rev ${r.rev}`);
+	return out;
+}
 
 export async function historyOf(
 	shopId: number,
 	jointIds: number[]
 ): Promise<Map<number, JointHistory>> {
 	const out = new Map<number, JointHistory>(
-		jointIds.map((id) => [id, { round: 0, logs: [], overrides: [] }])
+		jointIds.map((id) => [
+			id,
+			{ round: 0, status: 'open', logs: [], overrides: [], inspections: [], repairs: [] }
+		])
 	);
 	if (!jointIds.length) return out;
 	const where = { shopId, jointId: { [Op.in]: jointIds } };
-	const [logs, overrides, repairs] = await Promise.all([
-		WeldLog.findAll({ where, order: [['id', 'ASC']] }),
-		WeldOverride.findAll({ where, order: [['id', 'ASC']] }),
-		JointRepair.findAll({ where, attributes: ['jointId', 'round'] })
+	const byId = { order: [['id', 'ASC']] as [string, string][] };
+	const [logs, overrides, inspections, repairs] = await Promise.all([
+		WeldLog.findAll({ where, ...byId }),
+		WeldOverride.findAll({ where, ...byId }),
+		JointInspection.findAll({ where, ...byId }),
+		JointRepair.findAll({ where, ...byId })
 	]);
-	for (const r of repairs) {
-		const h = out.get(r.jointId);
-		if (h && r.round > h.round) h.round = r.round;
-	}
-	const welderIds = [...new Set([...logs, ...overrides].map((x) => x.welderId))];
+	const welderIds = [...new Set([...logs, ...overrides, ...repairs].map((x) => x.welderId))];
 	const welders = welderIds.length
 		? await Welder.findAll({ where: { shopId, id: { [Op.in]: welderIds } } })
 		: [];
@@ -30,6 +65,7 @@ export async function historyOf(
 		const w = welders.find((x) => x.id === id);
 		return { welderName: w?.name ?? '(unknown welder)', stamp: w?.stamp ?? '' };
 	};
+	const label = await labels(shopId, [...new Set(repairs.map((r) => r.revisionId))]);
 	for (const l of logs)
 		out.get(l.jointId)?.logs.push({
 			id: l.id,
@@ -54,5 +90,35 @@ export async function historyOf(
 			signedAt: o.signedAt.toISOString(),
 			digest: o.digest
 		});
+	for (const i of inspections)
+		out.get(i.jointId)?.inspections.push({
+			id: i.id,
+			round: roundOf(i.canonical),
+			method: i.method,
+			extent: i.extent,
+			result: i.result,
+			note: i.note,
+			printedName: i.printedName,
+			role: i.role,
+			signedAt: i.signedAt.toISOString(),
+			digest: i.digest
+		});
+	for (const r of repairs) {
+		const h = out.get(r.jointId);
+		if (!h) continue;
+		h.round = Math.max(h.round, r.round);
+		h.repairs.push({
+			id: r.id,
+			round: r.round,
+			inspectionId: r.inspectionId,
+			revisionId: r.revisionId,
+			procedureLabel: label.get(r.revisionId) ?? '?',
+			...who(r.welderId),
+			note: r.note,
+			recordedByName: r.recordedByName,
+			recordedAt: r.createdAt.toISOString()
+		});
+	}
+	for (const h of out.values()) h.status = jointStatus(h);
 	return out;
 }

@@ -25,7 +25,7 @@ export class JointListError extends RefusedError {
 }
 
 /** The revision a joint is to be welded to: the one named, else the one in force, else the newest. */
-async function revisionFor(
+export async function revisionFor(
 	shopId: number,
 	number: string,
 	rev: string,

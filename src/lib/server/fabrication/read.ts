@@ -59,7 +59,7 @@ export async function jointsOf(shopId: number, jobIds: number[]): Promise<JointV
 			process: r?.process ?? '',
 			passes: r ? passesOf(readVariables(r).variables) : ['root', 'fill', 'cap'],
 			round: history.get(j.id)?.round ?? 0,
-			history: history.get(j.id) ?? { round: 0, logs: [], overrides: [] }
+			history: history.get(j.id)!
 		};
 	});
 }

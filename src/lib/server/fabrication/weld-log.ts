@@ -9,7 +9,7 @@ import { audit } from '../audit';
 import type { SessionUser } from '../auth/session-user';
 import { write } from '../db';
 import { insertUnlessDuplicate } from '../db/dialect';
-import { Job, JobJoint, WeldLog, WeldOverride, Welder } from '../models';
+import { Job, JobJoint, JointRepair, WeldLog, WeldOverride, Welder } from '../models';
 import type { WeldPass } from '../models/weld-log';
 import { ForbiddenError, NotFoundError, RefusedError } from '../people/errors';
 import { actingMember, actorOf } from '../procedures/access';
@@ -48,7 +48,18 @@ export async function logWeld(
 	const welder = await Welder.findOne({ where: { shopId: actor.shopId, userId: actor.id } });
 	if (!welder) throw new RefusedError(NOT_A_WELDER);
 	const today = localDay(now);
-	const check = await checkWeld(actor.shopId, joint, welder, today);
+	// A repair round is welded to the repair's procedure revision.
+	const repair = await JointRepair.findOne({
+		where: { jointId: joint.id },
+		order: [['round', 'DESC']]
+	});
+	const revisionId = repair?.revisionId ?? joint.revisionId;
+	const check = await checkWeld(
+		actor.shopId,
+		{ ...joint.get({ plain: true }), revisionId },
+		welder,
+		today
+	);
 	if (check.kind === 'revision') throw new RefusedError(check.refusal!);
 	const passes = [...new Set(input.passes)];
 	if (passes.some((p) => !check.passes.includes(p)))
@@ -91,7 +102,7 @@ export async function logWeld(
 					welderId: welder.id,
 					pass,
 					weldedOn: today,
-					revisionId: joint.revisionId,
+					revisionId,
 					round,
 					overrideId,
 					continuityEntryId: entry.id,
@@ -121,7 +132,7 @@ export async function logWeld(
 					passes: logged,
 					round,
 					weldedOn: today,
-					revisionId: joint.revisionId,
+					revisionId,
 					overrideId,
 					continuity: created ? { process: check.process, usedOn: today } : 'already logged today'
 				}

@@ -9,18 +9,21 @@ import {
 	JOB_VIEW_ROLES,
 	jobView,
 	JointListError,
+	INSPECT_ROLES,
 	logWeld,
+	recordOverride,
 	WELD_ROLES
 } from '$lib/server/fabrication';
 import { postedForm } from '$lib/server/forms/posted-form';
-import { Procedure } from '$lib/server/models';
+import { Procedure, Welder } from '$lib/server/models';
 import { refuseForm, rethrowAsHttp } from '$lib/server/people/form-errors';
-import { jointCsvSchema, jointSchema, weldLogSchema } from '$lib/schemas/job';
+import { jointCsvSchema, jointSchema, overrideSchema, weldLogSchema } from '$lib/schemas/job';
 import { refusal } from '$lib/server/procedures/form-errors';
 import type { Actions, PageServerLoad } from './$types';
 
 const jointForm = zod4(jointSchema);
 const csvForm = zod4(jointCsvSchema);
+const overrideForm = zod4(overrideSchema);
 
 export const load: PageServerLoad = async (event) => {
 	const user = requireRole(event, ...JOB_VIEW_ROLES);
@@ -30,6 +33,16 @@ export const load: PageServerLoad = async (event) => {
 		job,
 		canEdit,
 		canLog: WELD_ROLES.includes(user.role),
+		canInspect: INSPECT_ROLES.includes(user.role),
+		welders: INSPECT_ROLES.includes(user.role)
+			? (
+					await Welder.findAll({
+						where: { shopId: user.shopId, active: true },
+						order: [['name', 'ASC']]
+					})
+				).map((w) => ({ id: w.id, name: w.name, stamp: w.stamp }))
+			: [],
+		overrideForm: await superValidate(overrideForm, { id: 'override', errors: false }),
 		created: event.url.searchParams.has('created'),
 		csvExample: CSV_EXAMPLE,
 		procedures: canEdit
@@ -96,5 +109,20 @@ export const actions: Actions = {
 			const r = refusal(e);
 			return fail(r.status, { log: { jointId, ok: false, text: r.message } });
 		}
+	},
+	override: async (event) => {
+		const user = requireRole(event, ...INSPECT_ROLES);
+		const form = await superValidate(await postedForm(event.request), overrideForm, {
+			id: 'override'
+		});
+		const input = { ...form.data };
+		form.data.password = ''; // the password is never sent back
+		if (!form.valid) return fail(400, { form });
+		try {
+			await recordOverride(user, input, event);
+		} catch (e) {
+			return refuseForm(form, e);
+		}
+		return message(form, { tone: 'success' as const, text: 'Override signed.' });
 	}
 };
