@@ -37,10 +37,11 @@ test('an engineer opens a job and lists its joints from a pasted list', async ({
 	await expect(page.getByTestId('joint-row')).toHaveCount(2);
 	await expect(page.getByTestId('joint-row').first()).toContainText('WPS-001 rev 2');
 
-	await page.getByLabel('Mark').fill('J3');
-	await page.getByLabel('Position').selectOption('2F');
-	await page.getByLabel('Procedure number').fill('WPS-002');
-	await page.getByRole('button', { name: 'Add the joint' }).click();
+	const add = page.getByTestId('add-joint');
+	await add.getByLabel('Mark').fill('J3');
+	await add.getByLabel('Position').selectOption('2F');
+	await add.getByLabel('Procedure number').fill('WPS-002');
+	await add.getByRole('button', { name: 'Add the joint' }).click();
 	await expect(page.getByTestId('joint-row')).toHaveCount(3);
 
 	const w = await (await browser.newContext()).newPage();
@@ -106,4 +107,50 @@ test('an inspector signs an override with a reason; the refused welder may then 
 	await row.getByRole('button', { name: 'Welded by me today' }).click();
 	await expect(row.getByTestId('weld-logs')).toContainText('Root: LTR-07 Tomas Whitlow');
 	await expect(row.getByTestId('weld-logs')).toContainText('(under override)');
+});
+
+test('an inspector rejects a joint, a repair is opened, welded and accepted; the counts follow', async ({
+	page,
+	browser
+}) => {
+	await signIn(page, inspector);
+	await page.goto('/jobs');
+	await page.getByRole('link', { name: 'JOB-2026-014' }).click();
+	const jobPath = new URL(page.url()).pathname;
+	const form = page.getByTestId('inspection-form');
+	const inspect = async (result: 'Accept' | 'Reject', note: string) => {
+		await form.getByLabel('Joint').selectOption({ label: 'W4' });
+		await form.getByLabel('Method').selectOption('RT');
+		await form.getByLabel('Result').selectOption({ label: result });
+		await form.getByLabel('Note').fill(note);
+		await form.getByLabel(/Your password/).fill(inspector.password);
+		await form.getByRole('button', { name: 'Sign the inspection' }).click();
+		await expect(form).toContainText('Inspection signed.');
+	};
+	await inspect('Reject', 'Lack of fusion at the root, 20 mm.');
+	const w4 = page.locator('[data-testid="joint-row"][data-mark="W4"]');
+	await expect(w4.getByTestId('joint-status')).toHaveAttribute('data-status', 'rejected');
+	await expect(w4.getByTestId('joint-steps')).toContainText('RT 100 %: rejected');
+
+	const repair = page.getByTestId('repair-form');
+	await repair.getByLabel('Rejected joint').selectOption({ label: 'W4' });
+	await repair.getByLabel('Repair welder').selectOption({ label: 'LTR-07 Tomas Whitlow' });
+	await repair.getByLabel('Repair procedure number').fill('WPS-002');
+	await repair.getByRole('button', { name: 'Open the repair' }).click();
+	await expect(repair).toContainText('Repair 1 opened.');
+	await expect(w4.getByTestId('joint-status')).toHaveAttribute('data-status', 'repaired');
+
+	const w = await (await browser.newContext()).newPage();
+	await signIn(w, welder);
+	await w.goto(jobPath);
+	const row = w.locator('[data-testid="joint-row"][data-mark="W4"]');
+	await row.getByLabel('Root').check();
+	await row.getByRole('button', { name: 'Welded by me today' }).click();
+	await expect(row.getByTestId('weld-logs')).toContainText('Root: LTR-07 Tomas Whitlow');
+
+	await page.reload();
+	await inspect('Accept', 'Repair sound.');
+	await expect(w4.getByTestId('joint-status')).toHaveAttribute('data-status', 'accepted');
+	await expect(w4.getByTestId('joint-steps')).toContainText('Repair 1 to WPS-002 rev 1');
+	await expect(page.locator('[data-count="Repaired"]')).toContainText('1');
 });

@@ -45,6 +45,8 @@ export const ACCESS_RULES: Record<string, Access> = {
 	'GET /admin/shop': roles(ADMIN),
 	'GET /admin/tokens': roles(ADMIN),
 	'GET /api/v1/health': pub(),
+	'GET /api/v1/jobs': members,
+	'GET /api/v1/jobs/[id=id]': members,
 	'GET /api/v1/pqrs': roles(VIEW),
 	'GET /api/v1/pqrs/[id=id]': roles(VIEW),
 	'GET /api/v1/procedures': roles(VIEW),
@@ -59,6 +61,7 @@ export const ACCESS_RULES: Record<string, Access> = {
 	'GET /help/checks': pub(),
 	'GET /offline': pub(), // the service worker's "not on this phone" page: names nobody
 	'GET /jobs': members, // the welder opens a job to log a weld
+	'GET /jobs/[id=id]/weld-log.csv': members,
 	'GET /jobs/[id=id]': members,
 	'GET /jobs/new': roles(AUTHOR),
 	'GET /invite/[token]': pub([404, 410]), // no live invite token can be read back (hashed)
@@ -138,6 +141,8 @@ export const ACCESS_RULES: Record<string, Access> = {
 	'POST /jobs/[id=id]?/importJoints': roles(AUTHOR),
 	'POST /jobs/[id=id]?/log': roles(['welder']), // only the welder logs their own weld
 	'POST /jobs/[id=id]?/override': roles(REVIEW), // an inspector's signed override
+	'POST /jobs/[id=id]?/inspect': roles(REVIEW),
+	'POST /jobs/[id=id]?/repair': roles(['admin', 'engineer', 'inspector']),
 	'POST /jobs/new': roles(AUTHOR),
 	'POST /pqrs/[id=id]?/addendum': roles(AUTHOR),
 	'POST /pqrs/[id=id]?/certify': roles(CERTIFY),

@@ -10,3 +10,4 @@ export { findJoint, logWeld, NOT_A_WELDER, type LoggedWeld } from './weld-log';
 export { checkWeld, type WeldCheck } from './weld-check';
 export { recordOverride } from './override';
 export { signatureHolds } from './signing';
+export { recordInspection, recordRepair } from './inspection';

@@ -24,7 +24,10 @@ export function roundOf(canonical: string): number {
 	}
 }
 
-async function labels(shopId: number, revisionIds: number[]): Promise<Map<number, string>> {
+export async function revisionLabels(
+	shopId: number,
+	revisionIds: number[]
+): Promise<Map<number, string>> {
 	const out = new Map<number, string>();
 	if (!revisionIds.length) return out;
 	const revisions = await ProcedureRevision.findAll({
@@ -65,7 +68,7 @@ export async function historyOf(
 		const w = welders.find((x) => x.id === id);
 		return { welderName: w?.name ?? '(unknown welder)', stamp: w?.stamp ?? '' };
 	};
-	const label = await labels(shopId, [...new Set(repairs.map((r) => r.revisionId))]);
+	const label = await revisionLabels(shopId, [...new Set(repairs.map((r) => r.revisionId))]);
 	for (const l of logs)
 		out.get(l.jointId)?.logs.push({
 			id: l.id,

@@ -1,8 +1,9 @@
-// The shop-wide job list: each job with its joint count (and, as the weld log grows, its
-// progress), newest first.
-import { fn, col } from 'sequelize';
+// The shop-wide job list: each job with its progress (welded, inspected, accepted, rejected,
+// repaired, needing attention), newest first.
+import { jobCounts, type JobCounts } from '$lib/jobs/status';
 import type { SessionUser } from '../auth/session-user';
 import { JobJoint } from '../models';
+import { historyOf } from './joint-history';
 import { listJobs } from './jobs';
 
 export interface JobRow {
@@ -12,17 +13,19 @@ export interface JobRow {
 	part: string;
 	code: string;
 	dueOn: string | null;
-	joints: number;
+	counts: JobCounts;
 }
 
 export async function jobList(actor: Pick<SessionUser, 'shopId'>): Promise<JobRow[]> {
 	const jobs = await listJobs(actor);
-	const counts = (await JobJoint.findAll({
+	const joints = await JobJoint.findAll({
 		where: { shopId: actor.shopId },
-		attributes: ['jobId', [fn('count', col('id')), 'n']],
-		group: ['jobId'],
-		raw: true
-	})) as unknown as Array<{ jobId: number; n: number | string }>;
+		attributes: ['id', 'jobId']
+	});
+	const history = await historyOf(
+		actor.shopId,
+		joints.map((j) => j.id)
+	);
 	return jobs.map((j) => ({
 		id: j.id,
 		number: j.number,
@@ -30,6 +33,6 @@ export async function jobList(actor: Pick<SessionUser, 'shopId'>): Promise<JobRo
 		part: j.part,
 		code: j.code,
 		dueOn: j.dueOn,
-		joints: Number(counts.find((c) => c.jobId === j.id)?.n ?? 0)
+		counts: jobCounts(joints.filter((x) => x.jobId === j.id).map((x) => history.get(x.id)!))
 	}));
 }

@@ -25,6 +25,15 @@ describe('demo job', () => {
 			const view = await jobView({ shopId: shop.id }, job!.id);
 			expect(view.joints.map((j) => j.mark)).toEqual(['W1', 'W2', 'W3', 'W4', 'W5', 'W6']);
 			expect(view.joints.every((j) => j.revisionState === 'approved')).toBe(true);
+			// Half done: W1 accepted, W2 and W3 welded, W4 to W6 open.
+			expect(view.joints.map((j) => j.history.status)).toEqual([
+				'accepted',
+				'welded',
+				'welded',
+				'open',
+				'open',
+				'open'
+			]);
 			expect(await seedJobs(shop)).toBeNull();
 			expect(await JobJoint.count({ where: { jobId: job!.id } })).toBe(6);
 		}

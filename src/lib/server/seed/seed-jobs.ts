@@ -1,8 +1,10 @@
-// The demo job (issue #17): an invented trailer hitch frame for an invented customer, its joints
-// welded to the demo shop's procedures in force. Idempotent: a job whose number exists is left
-// as it is.
-import { createJob, importJoints } from '../fabrication';
+// The demo job (issue #17): an invented trailer hitch frame for an invented customer, half done.
+// Its joints are welded to the demo shop's procedures in force; Tomas Whitlow has welded W1 to W3
+// today and Mirela Sand accepted W1 on sight; W4 to W6 wait for the welder. Idempotent: a job
+// whose number exists is left as it is.
+import { createJob, importJoints, jobView, logWeld, recordInspection } from '../fabrication';
 import { Job, type Shop } from '../models';
+import { DEMO_PEOPLE } from './demo-people';
 import { member } from './seed-procedures';
 
 export const DEMO_JOB = 'JOB-2026-014';
@@ -29,5 +31,22 @@ export async function seedJobs(shop: Shop): Promise<number | null> {
 		dueOn: ''
 	});
 	await importJoints(reuben, id, JOINTS);
+	const tomas = await member('tomas@larkspur.example', shop);
+	const mirela = await member('mirela@larkspur.example', shop);
+	const password = DEMO_PEOPLE.find((p) => p.email === 'mirela@larkspur.example')?.password;
+	if (!tomas || !mirela || !password) return id;
+	const joints = (await jobView(reuben, id)).joints;
+	for (const j of joints.filter((x) => ['W1', 'W2', 'W3'].includes(x.mark)))
+		await logWeld(tomas, { jointId: j.id, passes: j.passes });
+	const w1 = joints.find((x) => x.mark === 'W1');
+	if (w1)
+		await recordInspection(mirela, {
+			jointId: w1.id,
+			method: 'VT',
+			extent: '100 %',
+			result: 'accept',
+			note: 'Fillet size and profile to the drawing.',
+			password
+		});
 	return id;
 }

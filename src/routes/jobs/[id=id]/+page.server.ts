@@ -11,19 +11,32 @@ import {
 	JointListError,
 	INSPECT_ROLES,
 	logWeld,
+	recordInspection,
 	recordOverride,
+	recordRepair,
+	REPAIR_ROLES,
 	WELD_ROLES
 } from '$lib/server/fabrication';
 import { postedForm } from '$lib/server/forms/posted-form';
 import { Procedure, Welder } from '$lib/server/models';
 import { refuseForm, rethrowAsHttp } from '$lib/server/people/form-errors';
-import { jointCsvSchema, jointSchema, overrideSchema, weldLogSchema } from '$lib/schemas/job';
+import {
+	inspectionSchema,
+	jointCsvSchema,
+	jointSchema,
+	overrideSchema,
+	repairSchema,
+	weldLogSchema
+} from '$lib/schemas/job';
+import { jobCounts } from '$lib/jobs/status';
 import { refusal } from '$lib/server/procedures/form-errors';
 import type { Actions, PageServerLoad } from './$types';
 
 const jointForm = zod4(jointSchema);
 const csvForm = zod4(jointCsvSchema);
 const overrideForm = zod4(overrideSchema);
+const inspectionForm = zod4(inspectionSchema);
+const repairForm = zod4(repairSchema);
 
 export const load: PageServerLoad = async (event) => {
 	const user = requireRole(event, ...JOB_VIEW_ROLES);
@@ -34,7 +47,9 @@ export const load: PageServerLoad = async (event) => {
 		canEdit,
 		canLog: WELD_ROLES.includes(user.role),
 		canInspect: INSPECT_ROLES.includes(user.role),
-		welders: INSPECT_ROLES.includes(user.role)
+		canRepair: REPAIR_ROLES.includes(user.role),
+		counts: jobCounts(job.joints.map((j) => j.history)),
+		welders: REPAIR_ROLES.includes(user.role)
 			? (
 					await Welder.findAll({
 						where: { shopId: user.shopId, active: true },
@@ -43,6 +58,12 @@ export const load: PageServerLoad = async (event) => {
 				).map((w) => ({ id: w.id, name: w.name, stamp: w.stamp }))
 			: [],
 		overrideForm: await superValidate(overrideForm, { id: 'override', errors: false }),
+		inspectionForm: await superValidate(
+			{ method: 'VT' as const, extent: '100 %', result: 'accept' as const },
+			inspectionForm,
+			{ id: 'inspect', errors: false }
+		),
+		repairForm: await superValidate(repairForm, { id: 'repair', errors: false }),
 		created: event.url.searchParams.has('created'),
 		csvExample: CSV_EXAMPLE,
 		procedures: canEdit
@@ -124,5 +145,34 @@ export const actions: Actions = {
 			return refuseForm(form, e);
 		}
 		return message(form, { tone: 'success' as const, text: 'Override signed.' });
+	},
+	inspect: async (event) => {
+		const user = requireRole(event, ...INSPECT_ROLES);
+		const form = await superValidate(await postedForm(event.request), inspectionForm, {
+			id: 'inspect'
+		});
+		const input = { ...form.data };
+		form.data.password = ''; // the password is never sent back
+		if (!form.valid) return fail(400, { form });
+		try {
+			await recordInspection(user, input, event);
+		} catch (e) {
+			return refuseForm(form, e);
+		}
+		return message(form, { tone: 'success' as const, text: 'Inspection signed.' });
+	},
+	repair: async (event) => {
+		const user = requireRole(event, ...REPAIR_ROLES);
+		const form = await superValidate(await postedForm(event.request), repairForm, {
+			id: 'repair'
+		});
+		if (!form.valid) return fail(400, { form });
+		let round: number;
+		try {
+			({ round } = await recordRepair(user, form.data, event));
+		} catch (e) {
+			return refuseForm(form, e);
+		}
+		return message(form, { tone: 'success' as const, text: `Repair ${round} opened.` });
 	}
 };
