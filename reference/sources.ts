@@ -378,3 +378,34 @@ export const ASME_IX_QW_255_256: Source = {
 	kind: 'published',
 	note: 'E = essential, S = supplementary essential (when toughness testing applies), N = nonessential.'
 };
+
+// ---- ISO filler designations beside AWS classifications (issue 15) ----
+
+export const ISO_14343_GUIDE: Source = {
+	label: 'Guide to EN ISO 14343 – A, B: classification examples',
+	edition: 'ISO 14343:2009 as summarised in a public guide (html.pdfcookie.com; 1library.net copy)',
+	kind: 'published',
+	note: 'Gives G 19 12 3 L Si (system A) with SS316LSi (system B), and G 20 10 3 with SS308Mo, as one wire.'
+};
+
+export const AWS_A5_9_2017: Source = {
+	label: 'AWS A5.9/A5.9M:2017 (ISO 14343:2009 MOD), title page',
+	edition: 'A5.9/A5.9M:2017, public copy of the title page (studylib.net)',
+	kind: 'published',
+	note: 'A5.9 is ISO 14343 modified: its ER alloy types are the system B alloy types of ISO 14343.'
+};
+
+export const ISO_14341_GUIDE: Source = {
+	label: 'Guide to EN ISO 14341 – A: Table 3 wire chemistry',
+	edition: 'ISO 14341 as summarised in a public guide (studylib.net)',
+	kind: 'published',
+	note: 'G3Si1: Mn 1.30-1.60, Si 0.70-1.00 %; G4Si1: Mn 1.60-1.90, Si 0.80-1.20 %.'
+};
+
+export const ISO_FILLER_MEMORY: Source = {
+	label: 'ISO filler designation beside the AWS classification (recalled)',
+	edition:
+		'ISO 14341, ISO 636, ISO 14343, ISO 18273 as recalled; no public correspondence table read',
+	kind: 'from memory',
+	note: 'A wire is certified to each standard on its own: read the maker\u2019s certificate.'
+};

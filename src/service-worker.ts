@@ -9,7 +9,7 @@
 // pages; the booth view itself still ships no JavaScript.
 import { build, files, version } from '$service-worker';
 import { noticesBanner, offlineBanner, offlineNotice, queueBanner } from '$lib/offline/banners';
-import { clearKept, keep, keptAsset, keptCopy } from '$lib/offline/kept';
+import { clearKept, keep, keptAsset, keptCopy, pruneKeptAssets } from '$lib/offline/kept';
 import {
 	boothTapToken,
 	isKeptPath,
@@ -24,7 +24,9 @@ import {
 	dequeue,
 	dropNotices,
 	enqueue,
+	replacedAt,
 	setMember,
+	setReplacedAt,
 	takeNotices,
 	waiting
 } from '$lib/offline/queue';
@@ -56,16 +58,31 @@ sw.addEventListener('install', (event) => {
 sw.addEventListener('activate', (event) => {
 	event.waitUntil(
 		(async () => {
-			// A new deployment: the old shells go (kept pages keep their own stylesheets).
+			// A new deployment: the old shells go, and the kept stylesheets no kept page links to.
+			let replaced = false;
 			for (const name of await caches.keys())
-				if (name.startsWith('shell-') && name !== SHELL) await caches.delete(name);
+				if (name.startsWith('shell-') && name !== SHELL && (await caches.delete(name)))
+					replaced = true;
+			if (replaced) {
+				// Pages this worker takes over were served by the old one: they offer a reload.
+				await setReplacedAt(Date.now());
+				await pruneKeptAssets().catch(() => undefined);
+			}
 			await sw.clients.claim();
 		})()
 	);
 });
 
 sw.addEventListener('message', (event) => {
-	if (event.data?.type === 'flush') event.waitUntil(flushCurrent());
+	const type = (event.data as { type?: string } | null)?.type;
+	if (type === 'flush') event.waitUntil(flushCurrent());
+	// A page asks which deployment serves it, and since when (OfflineAgent.svelte).
+	else if (type === 'version')
+		event.waitUntil(
+			replacedAt().then((at) => event.ports[0]?.postMessage({ version, replacedAt: at }))
+		);
+	// A worker left waiting (none is, today: install skips the wait) moves in when asked.
+	else if (type === 'skip-waiting') event.waitUntil(sw.skipWaiting());
 });
 
 sw.addEventListener('fetch', (event) => {

@@ -24,6 +24,10 @@ test('the manifest and the service worker register with no console errors; the a
 	const errors: string[] = [];
 	page.on('console', (m) => m.type() === 'error' && errors.push(m.text()));
 	page.on('pageerror', (e) => errors.push(e.message));
+	// The worker's own console too: an error while it installs or serves counts.
+	context.on('serviceworker', (w) =>
+		w.on('console', (m) => m.type() === 'error' && errors.push(`[worker] ${m.text()}`))
+	);
 	await signIn(page, welder);
 	await controlled(page);
 	const manifest = await page.request.get('/manifest.webmanifest');
@@ -47,7 +51,18 @@ test('the manifest and the service worker register with no console errors; the a
 	const app = (await cdp.send('Page.getAppManifest')) as { errors: { message: string }[] };
 	expect(app.errors).toEqual([]);
 	await page.goto('/booth');
-	await page.goto(`/b/${await boothTokenOn(server, 'WPS-002', 1)}`);
+	// The booth view stays JavaScript-free with the worker installed and serving it.
+	const booth = await page.goto(`/b/${await boothTokenOn(server, 'WPS-002', 1)}`);
+	expect(booth?.fromServiceWorker()).toBe(true);
+	expect(await page.locator('script').count()).toBe(0);
+	// This document's own resources (the page before may still fetch its chunks as it goes).
+	const scripts = await page.evaluate(() =>
+		performance
+			.getEntriesByType('resource')
+			.map((e) => e.name)
+			.filter((url) => /\.m?js(\?|$)/.test(url))
+	);
+	expect(scripts).toEqual([]);
 	expect(errors).toEqual([]);
 	// One shell, this deployment's: an older one is deleted when its successor takes over.
 	const shells = await page.evaluate(async () =>

@@ -112,13 +112,26 @@ test('a draft from two records is reviewed, returned, fixed, signed, frozen and 
 	await eng.getByLabel('Amperage, to').fill('135');
 	await eng.getByTestId('save-draft').click();
 	await eng.getByTestId('submit-revision').click();
+	// In review before the inspector opens it (else the review page may show the draft).
+	await expect(eng.getByTestId('state').first()).toHaveAttribute('data-state', 'in-review');
 	await approve(ins, path.replace(/\/1$/, '/2'));
 	await eng.goto(path);
 	await expect(eng.getByTestId('state').first()).toHaveAttribute('data-state', 'superseded');
 	await expect(eng.getByTestId('superseded-note')).toContainText('Superseded by revision 2');
 
-	// The trail has every step, with the values before and after.
+	// The procedure's page leads with the revision in force and its values.
 	await eng.goto(path.replace(/\/revisions\/1$/, ''));
+	const inForce = eng.getByTestId('in-force-panel');
+	await expect(inForce.getByRole('heading', { name: 'Revision 2, in force' })).toBeVisible();
+	await expect(inForce.getByTestId('value-amps')).toContainText('135 A');
+	await expect(inForce.getByTestId('print-sheet')).toBeVisible();
+	// The "advises and records" line once: the cautions say it, so the footer's copy gives way.
+	await expect(eng.getByText(/Beadline advises and records/).filter({ visible: true })).toHaveCount(
+		1
+	);
+
+	// The trail, folded below, has every step, with the values before and after.
+	await eng.getByTestId('trail-fold').locator(':scope > summary').click();
 	const trail = eng.getByTestId('trail-entry');
 	const actions = await trail.evaluateAll((els) => els.map((e) => e.getAttribute('data-action')));
 	expect(actions).toEqual([
@@ -142,8 +155,21 @@ test('a draft from two records is reviewed, returned, fixed, signed, frozen and 
 	const state = approval.locator('[data-testid=change][data-path=state]');
 	await expect(state.getByTestId('before')).toHaveText('in-review');
 	await expect(state.getByTestId('after')).toHaveText('approved');
+	// …and says it in the shop's words: a sentence, labels, states by name, units.
+	await expect(approval.getByTestId('trail-sentence')).toHaveText(
+		'Mirela Sand approved and signed the revision'
+	);
+	await expect(approval.locator('[data-testid=change-words][data-path=state]')).toHaveText(
+		/State:\s+In review\s+→\s+Approved/
+	);
 	const edit = trail.filter({ hasText: 'procedure_revision.updated' }).nth(1);
 	await expect(
 		edit.locator('[data-path="variables.technique.travelSpeedMmPerS.min"] [data-testid=after]')
 	).not.toHaveText('—');
+	await expect(
+		edit.locator(
+			'[data-testid=change-words][data-path="variables.technique.travelSpeedMmPerS.min"]'
+		)
+	).toContainText(/Travel speed, low end:.*\d (in|mm)\/min/);
+	await expect(edit.getByTestId('trail-sentence')).not.toContainText('variables.');
 });

@@ -49,3 +49,25 @@ export async function keptAsset(path: string): Promise<Response | null> {
 	if (!(await caches.has(ASSETS))) return null;
 	return (await (await caches.open(ASSETS)).match(path)) ?? null;
 }
+
+/**
+ * After a new deployment: the kept stylesheets and fonts that no kept page links to any more
+ * (pages opened again since were saved with the new deployment's) go with the old shell.
+ */
+export async function pruneKeptAssets() {
+	if (!(await caches.has(ASSETS))) return;
+	const linked = new Set<string>();
+	for (const name of await caches.keys()) {
+		if (!name.startsWith(PREFIX) || name === ASSETS) continue;
+		const cache = await caches.open(name);
+		for (const req of await cache.keys()) {
+			const page = await cache.match(req);
+			if (!page) continue;
+			for (const href of linkedAssets(await page.text()))
+				linked.add(new URL(href, req.url).pathname);
+		}
+	}
+	const assets = await caches.open(ASSETS);
+	for (const req of await assets.keys())
+		if (!linked.has(new URL(req.url).pathname)) await assets.delete(req);
+}

@@ -1,7 +1,9 @@
 // The phone's own store (IndexedDB through idb-keyval): who is signed in as far as the worker
-// knows, the continuity taps waiting to send, and the notices about sent or refused taps that
-// the next page shows. Taps are filed by person and wait for that person to be signed in again:
-// a tap made offline is never dropped by a sign-out or by another person using the phone.
+// knows, the continuity taps waiting to send, the notices about sent or refused taps that the
+// next page shows, and when the running worker took over from an older deployment's (for the
+// "updated, reload" prompt of OfflineAgent.svelte). Taps are filed by person and wait for that
+// person to be signed in again: a tap made offline is never dropped by a sign-out or by another
+// person using the phone.
 import { createStore, del, get, set, update, type UseStore } from 'idb-keyval';
 import type { TapNotice } from './banners';
 
@@ -24,6 +26,10 @@ const db = () => (store ??= createStore('beadline-offline', 'state'));
 export const currentMember = async () => (await get<string>('member', db())) ?? null;
 export const setMember = async (member: string | null) =>
 	member ? set('member', member, db()) : del('member', db());
+
+/** Epoch ms when this deployment's worker replaced an older one; null after a first install. */
+export const replacedAt = async () => (await get<number>('replacedAt', db())) ?? null;
+export const setReplacedAt = (at: number) => set('replacedAt', at, db());
 
 const sameLocalDay = (a: number, b: number) =>
 	new Date(a).toDateString() === new Date(b).toDateString();

@@ -99,8 +99,8 @@ export const PROCEDURE_CHECK_CATALOGUE: readonly ProcedureCatalogueEntry[] = [
 	e(
 		'pqr-current-type',
 		'Current type the PQR qualifies',
-		'The procedure’s current type and polarity against the ones its PQRs were welded with.',
-		[QW_409_4]
+		'The procedure’s current type and polarity against the ones its PQRs were welded with (QW-409.4; ISO 15614-1 8.4.6 for ISO procedures; D1.1 procedures by their Table 4.5 trigger instead).',
+		[QW_409_4, S.ISO_15614_1_RANGES]
 	),
 	e(
 		'pqr-p-number',
@@ -117,13 +117,13 @@ export const PROCEDURE_CHECK_CATALOGUE: readonly ProcedureCatalogueEntry[] = [
 	e(
 		'pqr-positions',
 		'Positions the PQRs cover',
-		'Every production position against the test positions of the PQRs, by the position rules of QW-461.9 applied as the shop’s rule.',
-		[S.ASME_IX_QW_461_9]
+		'Every production position against the test positions of the PQRs, by the procedure’s own code: AWS D1.1 Table 4.1 for D1.1 procedures, ISO 15614-1 8.4.2 for ISO ones (a caution where impact or hardness requirements may limit the positions), and the position rules of QW-461.9 applied as the shop’s rule otherwise.',
+		[S.ASME_IX_QW_461_9, S.AWS_D1_1_QUALIFICATION, S.ISO_15614_1_RANGES]
 	),
 	e(
 		'pqr-code-rules',
 		'Changes from the PQR, by the procedure’s own code',
-		'ASME IX procedures: each change from the PQR classed by QW-255 (GMAW, FCAW) or QW-256 (GTAW) as essential, supplementary essential or nonessential. ISO 15614-1 procedures: transfer mode by 8.5.2.3, and a plain note where the standard has no range for the variable. D1.1 procedures keep the Table 4.5 triggers.',
+		'ASME IX procedures: each change from the PQR classed by QW-255 (GMAW, FCAW) or QW-256 (GTAW) as essential, supplementary essential or nonessential. ISO 15614-1 procedures: transfer mode by 8.5.2.3, and a plain note where the standard has no range for the variable. D1.1 procedures keep the Table 4.5 triggers. For D1.1 and ISO procedures, every variable the procedure sets for which Beadline has no rule of that code says so plainly (no D1.1 rule modelled for this variable), and no other code’s rule is applied in its place; P- and F-Numbers are not compared for them, being ASME IX groupings.',
 		[S.ASME_IX_QW_255_256, S.ISO_15614_1_2017, S.AWS_D1_1_TABLE_4_5]
 	)
 ];

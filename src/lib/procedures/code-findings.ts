@@ -23,7 +23,7 @@ export interface PqrWithCoupon {
 	number: string;
 	qualified: PqrQualified;
 	/** From the PQR's actual values; absent for callers that do not read them. */
-	coupon?: { thicknessMm: number | null; transfer: Transfer | null };
+	coupon?: { thicknessMm: number | null; transfer: Transfer | null; testPosition?: string | null };
 }
 
 const PRODUCT_NOTE: FindingSource = {

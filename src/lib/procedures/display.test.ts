@@ -34,4 +34,14 @@ describe('groupsOf', () => {
 		});
 		expect(rows.find((r) => r.key === 'process')?.changed).toBe(true);
 	});
+
+	it('leaves the empty tungsten rows out of a diff of two GMAW revisions', () => {
+		const a = emptyVariables({ title: 'T', code: 'asme-ix', process: 'GMAW' });
+		const b = emptyVariables({ title: 'T', code: 'asme-ix', process: 'GMAW' });
+		b.electrical.amps = { min: 150, max: 190 };
+		const keys = diffRows(a, b, 'imperial').map((r) => r.key);
+		expect(keys).not.toContain('tungstenClass');
+		expect(keys).not.toContain('tungstenDiameter');
+		expect(keys).toContain('amps');
+	});
 });

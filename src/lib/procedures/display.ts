@@ -134,17 +134,25 @@ export function diffRows(
 ): { group: string; key: string; label: string; a: string; b: string; changed: boolean }[] {
 	const ga = groupsOf(a, system, true);
 	const gb = groupsOf(b, system, true);
+	// Rows pair by position, so both sides list every row; a row of another process that both
+	// leave empty (tungsten on two GMAW revisions) is then dropped.
+	const foreign = (key: string) => {
+		const only = ONLY_FOR[key];
+		return only !== undefined && only !== a.process && only !== b.process;
+	};
 	return ga.flatMap((group, i) =>
-		group.rows.map((row, j) => {
-			const other = gb[i]?.rows[j]?.value ?? '';
-			return {
-				group: group.title,
-				key: row.key,
-				label: row.label,
-				a: row.value,
-				b: other,
-				changed: row.value !== other
-			};
-		})
+		group.rows
+			.map((row, j) => {
+				const other = gb[i]?.rows[j]?.value ?? '';
+				return {
+					group: group.title,
+					key: row.key,
+					label: row.label,
+					a: row.value,
+					b: other,
+					changed: row.value !== other
+				};
+			})
+			.filter((r) => r.a !== '' || r.b !== '' || !foreign(r.key))
 	);
 }

@@ -25,6 +25,7 @@ import {
 	QW_424
 } from './check-catalogue';
 import { codeChangeFindings, codeThicknessFindings, type PqrWithCoupon } from './code-findings';
+import { codeGapFindings, codePositionFindings, inOwnCode, ownCodeSource } from './code-scope';
 import { lengthMm } from './pqr-values';
 
 export type ProcedureCheckId = CheckId | ProcedureOnlyCheckId;
@@ -102,8 +103,10 @@ function endSettings(v: RevisionVariables, end: 'low' | 'high'): WeldSettings {
 }
 
 function weldCoreFindings(v: RevisionVariables, system: UnitSystem): ProcedureFinding[] {
-	const low = runChecks(endSettings(v, 'low'), { system }).findings;
-	const high = runChecks(endSettings(v, 'high'), { system }).findings;
+	// A D1.1 table quoted on a revision of another code says so (code-scope.ts).
+	const own = (f: Finding) => inOwnCode(f, v.code);
+	const low = runChecks(endSettings(v, 'low'), { system }).findings.map(own);
+	const high = runChecks(endSettings(v, 'high'), { system }).findings.map(own);
 	const key = (f: Finding) => `${f.check}|${f.field ?? ''}|${f.message}`;
 	const lowKeys = new Set(low.map(key));
 	const highKeys = new Set(high.map(key));
@@ -192,7 +195,7 @@ function pqrFindings(
 				message: `${p.number} was welded with ${p.qualified.process}; this procedure is ${v.process}.`,
 				value: v.process,
 				expected: { unit: p.qualified.process },
-				source: QW_401,
+				source: ownCodeSource(v.code, 'process', QW_401),
 				at: 'process',
 				pqr: p.number
 			})
@@ -237,8 +240,12 @@ function pqrFindings(
 		}
 	}
 
-	// Positions: every production position must be covered by a PQR's test position.
-	const pos = same.flatMap((p) => (p.qualified.positions ? [p.qualified.positions] : []));
+	// Positions: every production position must be covered by a PQR's test position, by the
+	// revision's own code (D1.1 Table 4.1, ISO 15614-1 8.4.2; else QW-461.9 as the shop's rule).
+	if (byCode) out.push(...codePositionFindings(v, same));
+	const pos = byCode
+		? []
+		: same.flatMap((p) => (p.qualified.positions ? [p.qualified.positions] : []));
 	if (pos.length && v.positions.allowed.length) {
 		const groove = new Set(pos.flatMap((x) => x.groove));
 		const fillet = new Set(pos.flatMap((x) => x.fillet));
@@ -288,38 +295,44 @@ function pqrFindings(
 		);
 	};
 	const uniq = <T>(xs: T[]) => [...new Set(xs)];
-	setCheck(
-		'pqr-p-number',
-		'P-Number',
-		v.baseMetals.pNumbers,
-		uniq(same.flatMap((p) => p.qualified.pNumbers)),
-		QW_424,
-		'pNumbers',
-		(x) => `P-${x}`
-	);
-	setCheck(
-		'pqr-f-number',
-		'F-Number',
-		v.fillerMetals.fNumbers,
-		uniq(same.flatMap((p) => p.qualified.fNumbers)),
-		QW_404_4,
-		'fNumbers',
-		(x) => `F-${x}`
-	);
+	// P- and F-Numbers are ASME IX groupings: D1.1 and ISO revisions get codeGapFindings instead.
+	if (!byCode)
+		setCheck(
+			'pqr-p-number',
+			'P-Number',
+			v.baseMetals.pNumbers,
+			uniq(same.flatMap((p) => p.qualified.pNumbers)),
+			QW_424,
+			'pNumbers',
+			(x) => `P-${x}`
+		);
+	if (!byCode)
+		setCheck(
+			'pqr-f-number',
+			'F-Number',
+			v.fillerMetals.fNumbers,
+			uniq(same.flatMap((p) => p.qualified.fNumbers)),
+			QW_404_4,
+			'fNumbers',
+			(x) => `F-${x}`
+		);
 	const currents = uniq(
 		same.flatMap((p) => (p.qualified.currentType ? [p.qualified.currentType] : []))
 	);
-	if (v.electrical.currentType)
+	// D1.1 classes a current change by Table 4.5 with the other triggers below.
+	if (v.electrical.currentType && v.code !== 'aws-d1.1')
 		setCheck(
 			'pqr-current-type',
 			'Current',
 			[v.electrical.currentType],
 			currents,
-			QW_409_4,
+			ownCodeSource(v.code, 'currentType', QW_409_4),
 			'currentType',
 			String
 		);
 
+	// Where the revision's code has no rule for a variable it sets, a finding that says so.
+	out.push(...codeGapFindings(v, same));
 	// Changes from each PQR by the revision's own code: ASME IX QW-255/256 or ISO 15614-1 8.4.
 	if (v.code === 'asme-ix' || v.code === 'iso-15609-1') {
 		for (const p of same) out.push(...codeChangeFindings(v, p));

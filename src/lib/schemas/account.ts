@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { SHOP_CODES } from '$lib/procedures/default-code';
 import { ROLES } from '$lib/roles';
 
 // Shared by the forms (client and server) and the API: one definition of what is acceptable.
@@ -74,7 +75,9 @@ export const shopSettingsSchema = z.object({
 		.trim()
 		.min(2, 'Enter the shop\u2019s name.')
 		.max(120, 'Keep it under 120 characters.'),
-	unitSystem: z.enum(['imperial', 'metric'], 'Pick imperial or metric.')
+	unitSystem: z.enum(['imperial', 'metric'], 'Pick imperial or metric.'),
+	// Issue 15: what new procedures, PQRs and welder qualifications start from; each can differ.
+	defaultCode: z.enum(SHOP_CODES, 'Pick the code the shop mostly works to.')
 });
 
 export const profileSchema = z.object({

@@ -4,6 +4,7 @@ import { z } from 'zod';
 import { CURRENT_TYPES, JOINT_TYPES, POSITIONS, PROCESSES, TRANSFERS } from '$lib/records/options';
 import { ENERGY_UNITS, STRENGTH_UNITS, TEST_KINDS, TEST_RESULTS } from '$lib/procedures/options';
 import { readQuantity, type QuantityKind } from '$lib/procedures/quantities';
+import { PQR_CODES } from '$lib/procedures/default-code';
 
 const finite = z.number().finite().nullable();
 const str = (max: number) => z.string().max(max);
@@ -94,6 +95,9 @@ export const pqrFormSchema = z
 				'Use letters, digits, - . _ / and spaces.'
 			),
 		title: text(120).refine((s) => s.length > 0, 'Give the PQR a title.'),
+		// Issue 15. Left out (an older API caller): a new PQR takes the shop's default code, an
+		// edited one keeps its own.
+		code: z.enum(PQR_CODES, 'Pick the code the coupon was qualified to.').optional(),
 		process: z.enum(PROCESSES, 'Pick the process.').default('GTAW'),
 		currentType: choice(CURRENT_TYPES, 'Pick DCEN, DCEP or AC.'),
 		transfer: choice(TRANSFERS, 'Pick a transfer mode.'),

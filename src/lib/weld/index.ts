@@ -25,3 +25,4 @@ export * from './d1-1-ranges';
 export * from './asme-variables';
 export * from './governing-code';
 export type { CheckContext } from './context';
+export * from './iso-filler';

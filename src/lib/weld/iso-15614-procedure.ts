@@ -4,6 +4,7 @@ import { ISO_15614_1_DIAMETER, ISO_15614_1_TEMPERATURE } from '$reference/iso-15
 import { ISO_POSITIONS, type IsoPosition } from '$reference/iso-6947';
 import { ISO_15614_1_LEVELS, ISO_TR_15608 } from '$reference/sources';
 import { isNum, sourceOf, type FindingSource } from './findings';
+import { isoFillerDesignations } from './iso-filler';
 import {
 	ISO_15614_SOURCE as SRC,
 	isoDiameterRange,
@@ -161,12 +162,18 @@ export function isoProcedureRanges(input: unknown): {
 				variable: 'Filler material',
 				clause: '8.4.4',
 				qualified: `${c.filler.designation.trim().slice(0, 40)} and fillers of equivalent mechanical properties, the same type of covering, core or flux, the same nominal composition and the same or lower hydrogen${c.impact === true && c.filler.make ? `; with impact requirements, the make tested (${c.filler.make.slice(0, 40)})` : ''}`,
-				notes:
-					c.impact === true && c.filler.make
+				notes: [
+					...(c.impact === true && c.filler.make
 						? [
 								'8.4.4 restricts the make for impact tests below −20 °C with processes 111, 114, 12, 136 and 132; Beadline asks it for every impact test.'
 							]
-						: [],
+						: []),
+					// The ISO designation beside the AWS one, where Beadline has one (iso-filler.ts).
+					...isoFillerDesignations(c.filler.designation, c.process).map(
+						(d) =>
+							`ISO designation beside the AWS one: ${d.designation} (${d.source.kind === 'published' ? d.source.label : 'from memory: check the maker\u2019s certificate'}).`
+					)
+				],
 				source: SRC
 			});
 		if (typeof c.gas === 'string' && c.gas.trim())

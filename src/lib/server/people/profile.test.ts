@@ -10,7 +10,7 @@ const { User } = await import('../models');
 const { verifyPassword } = await import('../auth/password');
 const { RefusedError } = await import('./errors');
 const { changePassword, getProfile, signOutMyDevices, updateProfile } = await import('./profile');
-const { getShopSettings, updateShopSettings } = await import('./shop-settings');
+const { getShopSettings, shopDefaultCode, updateShopSettings } = await import('./shop-settings');
 const { addMember, newShop } = await import('./test-support');
 
 type ShopFixture = Awaited<ReturnType<typeof newShop>>;
@@ -58,12 +58,31 @@ describe('shop settings', () => {
 		await updateShopSettings(a.admin, { name: 'Profile A renamed', unitSystem: 'metric' });
 		expect(await getShopSettings(a.admin)).toEqual({
 			name: 'Profile A renamed',
-			unitSystem: 'metric'
+			unitSystem: 'metric',
+			defaultCode: 'asme-ix'
 		});
-		expect(await getShopSettings(b.admin)).toEqual({ name: 'Profile B', unitSystem: 'imperial' });
+		expect(await getShopSettings(b.admin)).toEqual({
+			name: 'Profile B',
+			unitSystem: 'imperial',
+			defaultCode: 'asme-ix'
+		});
 		const welder = await addMember(a.shopId, 'welder');
 		await expect(
 			updateShopSettings(welder, { name: 'Hijack', unitSystem: 'imperial' })
 		).rejects.toThrow(/admin/);
+	});
+
+	it('keeps the default code unless it is given, and gives it to new work (issue 15)', async () => {
+		const c = await newShop('Profile C');
+		await updateShopSettings(c.admin, {
+			name: 'Profile C',
+			unitSystem: 'metric',
+			defaultCode: 'iso-15614-1'
+		});
+		// A caller that leaves the code out (an older client) keeps it.
+		await updateShopSettings(c.admin, { name: 'Profile C', unitSystem: 'imperial' });
+		expect(await getShopSettings(c.admin)).toMatchObject({ defaultCode: 'iso-15614-1' });
+		expect(await shopDefaultCode(c.shopId)).toBe('iso-15614-1');
+		expect(await shopDefaultCode(a.shopId)).toBe('asme-ix');
 	});
 });

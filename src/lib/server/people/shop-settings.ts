@@ -1,19 +1,33 @@
 import type { RequestEvent } from '@sveltejs/kit';
+import type { Transaction } from 'sequelize';
 import type { z } from 'zod';
 import type { shopSettingsSchema } from '$lib/schemas/account';
 import { audit } from '../audit';
 import type { SessionUser } from '../auth/session-user';
 import { write } from '../db';
+import { SHOP_CODES, type ShopCode } from '$lib/procedures/default-code';
 import { Shop } from '../models';
 import { actorRef, requireActiveAdmin } from './actor';
 import { NotFoundError } from './errors';
 
-export type ShopSettingsInput = z.output<typeof shopSettingsSchema>;
+export type ShopSettings = z.output<typeof shopSettingsSchema>;
+/** A caller that leaves the default code out keeps the shop's. */
+export type ShopSettingsInput = Omit<ShopSettings, 'defaultCode'> &
+	Partial<Pick<ShopSettings, 'defaultCode'>>;
 
-export async function getShopSettings(actor: SessionUser): Promise<ShopSettingsInput> {
+const shopCode = (x: string): ShopCode =>
+	(SHOP_CODES as readonly string[]).includes(x) ? (x as ShopCode) : 'asme-ix';
+
+export async function getShopSettings(actor: SessionUser): Promise<ShopSettings> {
 	const shop = await Shop.findByPk(actor.shopId);
 	if (!shop) throw new NotFoundError('Shop not found.');
-	return { name: shop.name, unitSystem: shop.unitSystem };
+	return { name: shop.name, unitSystem: shop.unitSystem, defaultCode: shopCode(shop.defaultCode) };
+}
+
+/** The governing code new procedures, PQRs and qualifications of the shop start from. */
+export async function shopDefaultCode(shopId: number, t?: Transaction): Promise<ShopCode> {
+	const shop = await Shop.findByPk(shopId, { attributes: ['id', 'defaultCode'], transaction: t });
+	return shopCode(shop?.defaultCode ?? '');
 }
 
 export async function updateShopSettings(
@@ -25,12 +39,15 @@ export async function updateShopSettings(
 		const me = await requireActiveAdmin(actor, t);
 		const shop = await Shop.findByPk(actor.shopId, { transaction: t });
 		if (!shop) throw new NotFoundError('Shop not found.');
-		const before = { name: shop.name, unitSystem: shop.unitSystem };
-		if (before.name === input.name && before.unitSystem === input.unitSystem) return;
-		await Shop.update(
-			{ name: input.name, unitSystem: input.unitSystem },
-			{ where: { id: actor.shopId }, transaction: t }
-		);
+		const before = { name: shop.name, unitSystem: shop.unitSystem, defaultCode: shop.defaultCode };
+		const after = { ...input, defaultCode: input.defaultCode ?? shop.defaultCode };
+		if (
+			before.name === after.name &&
+			before.unitSystem === after.unitSystem &&
+			before.defaultCode === after.defaultCode
+		)
+			return;
+		await Shop.update(after, { where: { id: actor.shopId }, transaction: t });
 		await audit(
 			{
 				shopId: actor.shopId,
@@ -39,7 +56,7 @@ export async function updateShopSettings(
 				objectType: 'shop',
 				objectId: actor.shopId,
 				before,
-				after: input
+				after
 			},
 			event,
 			t

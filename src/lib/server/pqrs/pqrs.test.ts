@@ -49,6 +49,27 @@ describe('PQRs', () => {
 		});
 	});
 
+	it('follows the code it is given, else the shop default, and an edit without one keeps it (issue 15)', async () => {
+		const { Shop } = await import('../models');
+		const { id: asGiven } = await svc.createPqr(a.engineer, {
+			...T.pqrForm(),
+			code: 'asme-ix+iso'
+		});
+		const both = await svc.getPqr(a.engineer, asGiven);
+		expect(both.code).toBe('asme-ix+iso');
+		// One coupon to both codes: the ISO 15614-1 set is there beside the ASME IX one.
+		expect(both.iso?.items.length).toBeGreaterThan(0);
+		expect(both.qualified.thickness).not.toBeNull();
+		await Shop.update({ defaultCode: 'iso-15614-1' }, { where: { id: b.engineer.shopId } });
+		const { id } = await svc.createPqr(b.engineer, { ...T.pqrForm(), number: 'PQR-CODE-1' });
+		expect((await svc.getPqr(b.engineer, id)).code).toBe('iso-15614-1');
+		await svc.updatePqr(b.engineer, id, { ...T.pqrForm(), number: 'PQR-CODE-1', title: 'Renamed' });
+		expect((await svc.getPqr(b.engineer, id)).code).toBe('iso-15614-1');
+		await svc.updatePqr(b.engineer, id, { ...T.pqrForm(), number: 'PQR-CODE-1', code: 'aws-d1.1' });
+		expect((await svc.getPqr(b.engineer, id)).code).toBe('aws-d1.1');
+		await Shop.update({ defaultCode: 'asme-ix' }, { where: { id: b.engineer.shopId } });
+	});
+
 	it('takes lab reports as PDF only, checked by content, and records their SHA-256', async () => {
 		const { id } = await svc.createPqr(a.engineer, T.pqrForm());
 		const png = new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0]);

@@ -1,4 +1,5 @@
 import { isoResultSet, type IsoResultSet } from '$lib/procedures/pqr-iso';
+import { d11ResultSet, type D11Item } from '$lib/procedures/pqr-d11';
 // PQRs as their pages and the API show them, with the certified digest re-verified on every view.
 import type { RequestEvent } from '@sveltejs/kit';
 import { Op, type WhereOptions } from 'sequelize';
@@ -30,10 +31,12 @@ export interface PqrView {
 	values: PqrValues;
 	tests: TestResult[];
 	qualified: PqrQualified;
-	/** Governing code of the PQR (migration 0011). */
+	/** Governing code of the PQR (migration 0011); `asme-ix+iso` for one coupon to both. */
 	code: string;
 	/** The ISO 15614-1 result set, for an ISO PQR (shown beside the ASME one). */
 	iso: IsoResultSet | null;
+	/** The AWS D1.1 result set, for a D1.1 PQR (shown beside the ASME one). */
+	d11: D11Item[] | null;
 	author: string;
 	certified: { by: string; at: string; digest: string } | null;
 	/** False when the stored content no longer gives the certified digest. */
@@ -152,7 +155,8 @@ export async function getPqr(
 		qualified: (safe(p.qualified) as PqrQualified | null) ?? qualifiedRanges(values),
 		// Issue 15: an ISO 15614-1 PQR shows the ISO result set beside the ASME one (computed now).
 		code: p.code,
-		iso: p.code === 'iso-15614-1' ? isoResultSet(values, tests) : null,
+		iso: ['iso-15614-1', 'asme-ix+iso'].includes(p.code) ? isoResultSet(values, tests) : null,
+		d11: p.code === 'aws-d1.1' ? d11ResultSet(values, actor.unitSystem) : null,
 		author: author?.name ?? 'former member',
 		certified:
 			p.certifiedAt && p.certifiedDigest

@@ -4,6 +4,8 @@ import type { RequestEvent } from '@sveltejs/kit';
 import { col, fn, Op, where, type Transaction } from 'sequelize';
 import type { PqrForm } from '$lib/schemas/pqr';
 import { formToPqr, qualifiedRanges } from '$lib/procedures/pqr-values';
+import { pqrCodeFor } from '$lib/procedures/default-code';
+import { shopDefaultCode } from '../people/shop-settings';
 import { audit } from '../audit';
 import type { SessionUser } from '../auth/session-user';
 import { write } from '../db';
@@ -71,8 +73,9 @@ export async function createPqr(
 		const me = await actingMember(actor, AUTHOR_ROLES, t);
 		await refuseClash(actor.shopId, form.number, null, t);
 		const { snapshot, ...cols } = c;
+		const code = form.code ?? pqrCodeFor(await shopDefaultCode(actor.shopId, t));
 		const pqr = await Pqr.create(
-			{ ...cols, shopId: actor.shopId, state: 'draft', authorId: me.id },
+			{ ...cols, code, shopId: actor.shopId, state: 'draft', authorId: me.id },
 			{ transaction: t }
 		);
 		await audit(
@@ -82,7 +85,7 @@ export async function createPqr(
 				action: 'pqr.created',
 				objectType: 'pqr',
 				objectId: pqr.id,
-				after: snapshot
+				after: { ...snapshot, code }
 			},
 			event,
 			t
@@ -105,7 +108,7 @@ export async function updatePqr(
 		await refuseClash(actor.shopId, form.number, id, t);
 		const before = snapshotOf(pqr);
 		const { snapshot, ...cols } = c;
-		const [n] = await Pqr.update(cols, {
+		const [n] = await Pqr.update(form.code ? { ...cols, code: form.code } : cols, {
 			where: { id, shopId: actor.shopId, state: 'draft' },
 			transaction: t
 		});
@@ -117,8 +120,8 @@ export async function updatePqr(
 				action: 'pqr.updated',
 				objectType: 'pqr',
 				objectId: id,
-				before,
-				after: snapshot
+				before: { ...before, code: pqr.code },
+				after: { ...snapshot, code: form.code ?? pqr.code }
 			},
 			event,
 			t

@@ -249,6 +249,10 @@ describe('scoping and records', () => {
 		expect(findings.find((f) => f.check === 'requalification' && f.field === 'amps')?.status).toBe(
 			'outside'
 		);
-		expect(findings.find((f) => f.check === 'pqr-positions')?.status).toBe('ok');
+		// The revision follows D1.1, so its positions are D1.1's (issue 15): a 3G test qualifies V
+		// only for a WPS, so 2F is not qualified. AWS D1.1:2015 Table 4.1 as recalled // from memory
+		const positions = findings.find((f) => f.check === 'pqr-positions');
+		expect(positions?.status).toBe('outside');
+		expect(positions?.message).toContain('D1.1 Table 4.1');
 	});
 });

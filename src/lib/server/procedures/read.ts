@@ -100,15 +100,24 @@ export async function pqrsFor(shopId: number, ids: number[]) {
 	});
 }
 
-/** Coupon thickness and transfer from a PQR's stored actual values (for D1.1 and ISO ranges). */
-function couponOf(json: string): { thicknessMm: number | null; transfer: Transfer | null } {
+/** Coupon thickness, transfer and test position from a PQR's stored actual values (D1.1, ISO). */
+function couponOf(json: string): {
+	thicknessMm: number | null;
+	transfer: Transfer | null;
+	testPosition: string | null;
+} {
 	try {
-		const v = JSON.parse(json) as { couponThicknessMm?: unknown; transfer?: unknown };
+		const v = JSON.parse(json) as {
+			couponThicknessMm?: unknown;
+			transfer?: unknown;
+			testPosition?: unknown;
+		};
 		const t = typeof v.couponThicknessMm === 'number' ? v.couponThicknessMm : null;
 		const tr = typeof v.transfer === 'string' ? (v.transfer as Transfer) : null;
-		return { thicknessMm: t, transfer: tr };
+		const pos = typeof v.testPosition === 'string' && v.testPosition ? v.testPosition : null;
+		return { thicknessMm: t, transfer: tr, testPosition: pos };
 	} catch {
-		return { thicknessMm: null, transfer: null };
+		return { thicknessMm: null, transfer: null, testPosition: null };
 	}
 }
 

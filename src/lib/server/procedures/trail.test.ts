@@ -83,6 +83,30 @@ beforeAll(async () => {
 		},
 		null
 	);
+	await audit(
+		{
+			shopId: a.shopId,
+			actor: by(a.engineer),
+			action: 'procedure_revision.updated',
+			objectType: 'procedure_revision',
+			objectId: 204,
+			before: { variables: { electrical: { amps: { min: 110, max: 130 } } } },
+			after: { variables: { electrical: { amps: { min: 115, max: 130 } } } }
+		},
+		null
+	);
+	await audit(
+		{
+			shopId: a.shopId,
+			actor: by(a.engineer),
+			action: 'settings_record.updated',
+			objectType: 'settings_record',
+			objectId: 505,
+			before: { thicknessMm: 3.175 },
+			after: { thicknessMm: 4.7625 }
+		},
+		null
+	);
 	// An old one, for the date filters (written straight, as the trail only ever appends).
 	await AuditEvent.create({
 		shopId: a.shopId,
@@ -146,6 +170,34 @@ describe('the shop-wide trail', () => {
 		expect([f.from, f.action, f.page]).toEqual([undefined, undefined, 1]);
 		// The same as no filter at all (the shop's own setup events included).
 		expect((await shopTrail(a.admin, f)).total).toBe((await shopTrail(a.admin, filters(''))).total);
+	});
+});
+
+describe('the trail in words', () => {
+	it('says each event as a sentence, in the reader’s units, beside the raw changes', async () => {
+		const [amps] = (await shopTrail(a.admin, filters('object=204'))).rows;
+		expect(amps?.words.sentence).toBe(
+			`${a.engineer.name} changed amperage, low end: 110 A → 115 A`
+		);
+		expect(amps?.changes).toEqual([
+			{ path: 'variables.electrical.amps.min', before: '110', after: '115' }
+		]);
+		const imperial = { ...a.admin, unitSystem: 'imperial' as const };
+		const metric = { ...a.admin, unitSystem: 'metric' as const };
+		const line = async (who: typeof a.admin) =>
+			(await shopTrail(who, filters('object=505'))).rows[0]?.words.changes[0]?.line;
+		expect(await line(imperial)).toBe('base metal thickness: 1/8 in → 3/16 in'); // 25.4 mm/in (NIST SP 811)
+		expect(await line(metric)).toBe('base metal thickness: 3.2 mm → 4.8 mm'); // stored mm, one place
+		// Moments read in UTC and say so: shops have no time zone setting.
+		expect(amps?.words.at.text).toMatch(/^\d{1,2} [A-Z][a-z]{2} \d{4}, \d{2}:\d{2} UTC$/);
+	});
+
+	it('leaves the export raw: codes, paths and stored values', async () => {
+		const rows = rowsOf(await shopTrailCsv(a.admin, filters('object=204')));
+		expect(rows[1]?.[3]).toBe('procedure_revision.updated');
+		expect(JSON.parse(rows[1]![7]!)).toEqual({
+			variables: { electrical: { amps: { min: 115, max: 130 } } }
+		});
 	});
 });
 

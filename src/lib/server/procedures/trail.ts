@@ -1,6 +1,8 @@
 // The audit trail of procedures and PQRs: per object, and shop-wide for admins with filters and a
-// CSV export. Events are append-only; before and after are shown as the paths that changed.
+// CSV export. Events are append-only; before and after are shown as the paths that changed, raw,
+// and beside them in the shop's words (`words`, from $lib/audit). The export stays raw.
 import { Op, type WhereOptions } from 'sequelize';
+import { describeEvent, type EventInWords, type Reading } from '$lib/audit/describe-event';
 import { likeOp } from '../db/dialect';
 import { sequelize } from '../db/sequelize';
 import type { SessionUser } from '../auth/session-user';
@@ -15,7 +17,16 @@ export interface TrailEntry {
 	objectId: string | null;
 	changes: { path: string; before: string; after: string }[];
 	ip: string | null;
+	/** The same event as a sentence, labels, the reader's units and a named time zone. */
+	words: EventInWords;
 }
+
+/**
+ * How the reader sees values: their unit system. Times: the server does not know the reader's
+ * zone and shops have no zone setting yet, so moments read in UTC and say so ("23:02 UTC"), with
+ * the exact instant in the page's <time datetime>. A shop zone, once there is one, goes here.
+ */
+const readingOf = (actor: SessionUser): Reading => ({ system: actor.unitSystem });
 
 const parse = (s: string | null): unknown => {
 	if (s === null) return undefined;
@@ -55,16 +66,25 @@ export function changesOf(before: unknown, after: unknown) {
 		.map((path) => ({ path, before: a[path] ?? '', after: b[path] ?? '' }));
 }
 
-const entry = (e: AuditEvent): TrailEntry => ({
-	id: e.id,
-	at: e.at.toISOString(),
-	actor: e.actorName,
-	action: e.action,
-	objectType: e.objectType,
-	objectId: e.objectId,
-	changes: changesOf(parse(e.before), parse(e.after)),
-	ip: e.ip
-});
+const entryFor =
+	(reading: Reading) =>
+	(e: AuditEvent): TrailEntry => {
+		const [before, after] = [parse(e.before), parse(e.after)];
+		return {
+			id: e.id,
+			at: e.at.toISOString(),
+			actor: e.actorName,
+			action: e.action,
+			objectType: e.objectType,
+			objectId: e.objectId,
+			changes: changesOf(before, after),
+			ip: e.ip,
+			words: describeEvent(
+				{ actor: e.actorName, action: e.action, at: e.at, before, after },
+				reading
+			)
+		};
+	};
 
 /** A procedure's own events, its revisions', and the freezing of the records it cites. */
 export async function procedureTrail(
@@ -95,7 +115,7 @@ export async function procedureTrail(
 		order: [['id', 'ASC']],
 		limit: 1000
 	});
-	return events.map(entry);
+	return events.map(entryFor(readingOf(actor)));
 }
 
 export async function objectTrail(actor: SessionUser, objectType: string, objectId: number) {
@@ -104,7 +124,7 @@ export async function objectTrail(actor: SessionUser, objectType: string, object
 		order: [['id', 'ASC']],
 		limit: 1000
 	});
-	return events.map(entry);
+	return events.map(entryFor(readingOf(actor)));
 }
 
 export interface TrailFilters {
@@ -145,7 +165,7 @@ export async function shopTrail(actor: SessionUser, f: TrailFilters) {
 		order: [['objectType', 'ASC']]
 	});
 	return {
-		rows: rows.map(entry),
+		rows: rows.map(entryFor(readingOf(actor))),
 		total: count,
 		pages: Math.max(1, Math.ceil(count / TRAIL_PAGE)),
 		types: types.map((t) => t.objectType)

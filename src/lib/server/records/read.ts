@@ -1,4 +1,6 @@
 // One record as its pages show it: values, findings, photos, who wrote it, its trail.
+import { actionWords } from '$lib/audit/action-labels';
+import { fieldOf, inSentence } from '$lib/audit/field-labels';
 import type { Finding } from '$lib/weld';
 import type { StoredValues } from '$lib/records/display';
 import type { SessionUser } from '../auth/session-user';
@@ -110,13 +112,6 @@ export interface HistoryEntry {
 	changed: string[];
 }
 
-const ACTIONS: Record<string, string> = {
-	'settings_record.created': 'Recorded',
-	'settings_record.updated': 'Edited',
-	'settings_photo.removed': 'Removed a photo',
-	'settings_record.frozen': 'Cited by a procedure (frozen)'
-};
-
 /** The record's audit trail, newest first, with the fields each change touched. */
 export async function recordHistory(actor: SessionUser, id: number): Promise<HistoryEntry[]> {
 	await findOwn(actor, id);
@@ -137,8 +132,9 @@ export async function recordHistory(actor: SessionUser, id: number): Promise<His
 		return {
 			at: e.at.toISOString(),
 			actor: e.actorName,
-			action: ACTIONS[e.action] ?? e.action,
-			changed
+			// The trail's one table of words: the event's label and each changed field's label.
+			action: actionWords(e.action).label,
+			changed: changed.map((k) => inSentence(fieldOf(k).label))
 		};
 	});
 }

@@ -106,7 +106,7 @@ describe('settings records', () => {
 		await expect(svc.updateRecord(inspector, id, form())).rejects.toThrow(/role/);
 		await svc.updateRecord(engineer, id, form({ amps: '130' }));
 		const history = await svc.recordHistory(engineer, id);
-		expect(history[0]).toMatchObject({ action: 'Edited', changed: ['amps'] });
+		expect(history[0]).toMatchObject({ action: 'Settings record edited', changed: ['amperage'] });
 		await write((t) => svc.freezeRecord(engineer.shopId, id, 99, t));
 		await expect(svc.updateRecord(engineer, id, form())).rejects.toThrow(/frozen/);
 		expect((await svc.getRecord(engineer, id)).canEdit).toBe(false);

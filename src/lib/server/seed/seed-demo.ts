@@ -4,7 +4,7 @@ import { Shop, User } from '../models';
 import { DEMO_PEOPLE, DEMO_SHOP, OTHER_PEOPLE, OTHER_SHOP, type DemoPerson } from './demo-people';
 import { seedWelders } from './seed-welders';
 import { seedProcedures } from './seed-procedures';
-import { seedIsoPqr } from './seed-iso';
+import { seedIsoPqr, seedIsoProcedure } from './seed-iso';
 import { seedRecords } from './seed-records';
 import { seedJobs } from './seed-jobs';
 
@@ -42,6 +42,7 @@ export async function seedDemo(): Promise<{ shop: Shop; other: Shop }> {
 	await seedRecords(shop);
 	await seedProcedures(shop);
 	await seedIsoPqr(shop);
+	await seedIsoProcedure(shop);
 	await seedJobs(shop);
 	return { shop, other };
 }

@@ -10,8 +10,8 @@ process.env.UPLOADS_DIR = join(dir, 'uploads');
 const { migrate } = await import('../db');
 const { seedDemo } = await import('./seed-demo');
 const { seedProcedures } = await import('./seed-procedures');
-const { seedIsoPqr } = await import('./seed-iso');
-const { Pqr, Procedure, ProcedureRevision } = await import('../models');
+const { seedIsoPqr, seedIsoProcedure } = await import('./seed-iso');
+const { BoothLink, Pqr, Procedure, ProcedureRevision, RevisionPqr } = await import('../models');
 const { checkIntegrity } = await import('../procedures');
 
 describe('demo procedures', () => {
@@ -30,8 +30,24 @@ describe('demo procedures', () => {
 		expect(await Pqr.count({ where: { shopId: shop.id, state: 'certified' } })).toBe(5);
 		const iso = await Pqr.findOne({ where: { shopId: shop.id, code: 'iso-15614-1' } });
 		expect(iso?.number).toBe('PQR-ISO-01');
+		const d11 = await Pqr.findOne({ where: { shopId: shop.id, number: 'PQR-002' } });
+		expect(d11?.code).toBe('aws-d1.1');
 		expect(await seedIsoPqr(shop)).toBe(0);
 		expect(await seedProcedures(shop)).toBe(0);
-		expect(await Procedure.count({ where: { shopId: shop.id } })).toBe(4);
+		// Four ASME / D1.1 procedures and WPS-ISO-01 (issue 15).
+		expect(await Procedure.count({ where: { shopId: shop.id } })).toBe(5);
+	});
+
+	it('has an approved ISO 15614-1 WPS backed by PQR-ISO-01, with a booth link, seeded once', async () => {
+		const { shop } = await seedDemo();
+		const wps = await Procedure.findOne({ where: { shopId: shop.id, number: 'WPS-ISO-01' } });
+		expect(wps).toMatchObject({ code: 'iso-15609-1', state: 'approved' });
+		const rev = await ProcedureRevision.findOne({ where: { procedureId: wps!.id, rev: 1 } });
+		expect(await checkIntegrity(rev!.id)).toMatchObject({ signed: true, ok: true });
+		const iso = await Pqr.findOne({ where: { shopId: shop.id, number: 'PQR-ISO-01' } });
+		expect(await RevisionPqr.count({ where: { revisionId: rev!.id, pqrId: iso!.id } })).toBe(1);
+		expect(await BoothLink.count({ where: { revisionId: rev!.id, revokedAt: null } })).toBe(1);
+		expect(await seedIsoProcedure(shop)).toBe(0);
+		expect(await Procedure.count({ where: { shopId: shop.id } })).toBe(5);
 	});
 });

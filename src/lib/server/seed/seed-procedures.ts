@@ -54,6 +54,8 @@ const PQRS = [
 	{
 		number: 'PQR-002',
 		title: 'GMAW A36 3/8 in plate, short-circuit, 3G',
+		// WPS-002 follows D1.1, and so does the coupon behind it (issue 15).
+		code: 'aws-d1.1',
 		process: 'GMAW',
 		currentType: 'DCEP',
 		transfer: 'short-circuit',

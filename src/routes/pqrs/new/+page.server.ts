@@ -6,6 +6,8 @@ import { AUTHOR_ROLES, nextNumber } from '$lib/server/procedures';
 import { createPqr } from '$lib/server/pqrs';
 import { refuse } from '$lib/server/procedures/form-errors';
 import { pqrFormSchema } from '$lib/schemas/pqr';
+import { pqrCodeFor } from '$lib/procedures/default-code';
+import { shopDefaultCode } from '$lib/server/people/shop-settings';
 import type { Actions, PageServerLoad } from './$types';
 import { postedForm } from '$lib/server/forms/posted-form';
 
@@ -14,8 +16,9 @@ const schema = zod4(pqrFormSchema);
 export const load: PageServerLoad = async (event) => {
 	const user = requireRole(event, ...AUTHOR_ROLES);
 	const number = await nextNumber(user.shopId, 'pqr', 'GTAW');
+	const code = pqrCodeFor(await shopDefaultCode(user.shopId));
 	return {
-		form: await superValidate({ units: user.unitSystem, number }, schema, { errors: false })
+		form: await superValidate({ units: user.unitSystem, number, code }, schema, { errors: false })
 	};
 };
 

@@ -1,8 +1,10 @@
 import { fail, redirect } from '@sveltejs/kit';
 import { requireRole } from '$lib/server/auth/guards';
+import { boothPath, ensureBoothLink } from '$lib/server/booth';
 import {
 	AUTHOR_ROLES,
 	findProcedure,
+	getRevision,
 	procedureTrail,
 	revisionsOf,
 	startRevision,
@@ -18,6 +20,13 @@ export const load: PageServerLoad = async (event) => {
 		const procedure = await findProcedure(user, id);
 		const [revisions, trail] = await Promise.all([revisionsOf(user, id), procedureTrail(user, id)]);
 		const head = revisions[0];
+		// The page leads with the revision in force: its values (checked against the signature, as
+		// the revision page checks them), its sheet and its booth view.
+		const inForce =
+			procedure.approvedRev == null
+				? null
+				: await getRevision(user, id, procedure.approvedRev, event);
+		const link = inForce ? await ensureBoothLink(user.shopId, inForce.revision.id) : null;
 		return {
 			procedure: {
 				id,
@@ -27,6 +36,16 @@ export const load: PageServerLoad = async (event) => {
 				process: procedure.process,
 				approvedRev: procedure.approvedRev ?? null,
 				headRev: procedure.headRev
+			},
+			inForce: inForce && {
+				rev: inForce.revision.rev,
+				decidedAt: inForce.revision.decidedAt,
+				groups: inForce.groups,
+				findings: inForce.findings,
+				variables: inForce.variables,
+				integrity: inForce.integrity,
+				signedBy: inForce.signOffs.filter((s) => s.meaning === 'approved').at(-1) ?? null,
+				boothPath: link ? boothPath(link.token) : null
 			},
 			revisions,
 			trail,

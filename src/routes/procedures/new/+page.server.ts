@@ -3,6 +3,8 @@ import { fail, superValidate } from 'sveltekit-superforms';
 import { zod4 } from '$lib/forms/zod4';
 import { requireRole } from '$lib/server/auth/guards';
 import { SettingsRecord } from '$lib/server/models';
+import { shopDefaultCode } from '$lib/server/people/shop-settings';
+import { procedureCodeFor } from '$lib/procedures/default-code';
 import { AUTHOR_ROLES, createProcedure, nextNumber } from '$lib/server/procedures';
 import { refuse } from '$lib/server/procedures/form-errors';
 import { newProcedureSchema } from '$lib/schemas/procedure';
@@ -36,6 +38,7 @@ export const load: PageServerLoad = async (event) => {
 	const form = await superValidate(
 		{
 			number: await nextNumber(user.shopId, 'wps', process),
+			code: procedureCodeFor(await shopDefaultCode(user.shopId)),
 			process,
 			recordIds: records.filter((r) => picked.includes(r.id)).map((r) => r.id)
 		},

@@ -7,6 +7,7 @@ import { CERTIFIED_MESSAGE, findPqr, readPqr, updatePqr } from '$lib/server/pqrs
 import { refuse, rethrowAsHttp } from '$lib/server/procedures/form-errors';
 import { pqrToForm } from '$lib/procedures/pqr-values';
 import { pqrFormSchema } from '$lib/schemas/pqr';
+import { asPqrCode } from '$lib/procedures/default-code';
 import type { Actions, PageServerLoad } from './$types';
 import { postedForm } from '$lib/server/forms/posted-form';
 
@@ -20,7 +21,10 @@ export const load: PageServerLoad = async (event) => {
 		if (p.state !== 'draft') return { head, refused: CERTIFIED_MESSAGE, form: null };
 		const { values, tests } = readPqr(p);
 		const form = await superValidate(
-			pqrToForm({ number: p.number, title: p.title, values, tests }, user.unitSystem),
+			{
+				...pqrToForm({ number: p.number, title: p.title, values, tests }, user.unitSystem),
+				code: asPqrCode(p.code)
+			},
 			schema,
 			{ errors: false }
 		);

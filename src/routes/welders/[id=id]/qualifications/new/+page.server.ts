@@ -7,6 +7,8 @@ import { RefusedError } from '$lib/server/people/errors';
 import { MANAGE_ROLES } from '$lib/server/welders/access';
 import { addQualification, MAX_RECORD_BYTES } from '$lib/server/welders/qualifications';
 import { findWelder } from '$lib/server/welders/welders';
+import { shopDefaultCode } from '$lib/server/people/shop-settings';
+import { qualificationCodeFor } from '$lib/procedures/default-code';
 import { qualificationSchema } from '$lib/schemas/welder';
 import type { Actions, PageServerLoad } from './$types';
 import { postedForm } from '$lib/server/forms/posted-form';
@@ -14,7 +16,8 @@ import { postedForm } from '$lib/server/forms/posted-form';
 export const load: PageServerLoad = async (event) => {
 	const user = requireRole(event, ...MANAGE_ROLES);
 	const w = await findWelder(user.shopId, Number(event.params.id)).catch(rethrowAsHttp);
-	const form = await superValidate({ units: user.unitSystem }, zod4(qualificationSchema), {
+	const code = qualificationCodeFor(await shopDefaultCode(user.shopId));
+	const form = await superValidate({ units: user.unitSystem, code }, zod4(qualificationSchema), {
 		errors: false
 	});
 	return { welder: { id: w.id, name: w.name, stamp: w.stamp }, form };
