@@ -116,6 +116,7 @@ test('an inspector rejects a joint, a repair is opened, welded and accepted; the
 	await signIn(page, inspector);
 	await page.goto('/jobs');
 	await page.getByRole('link', { name: 'JOB-2026-014' }).click();
+	await expect(page).toHaveURL(/\/jobs\/\d+$/); // the job page, not the list still
 	const jobPath = new URL(page.url()).pathname;
 	const form = page.getByTestId('inspection-form');
 	const inspect = async (result: 'Accept' | 'Reject', note: string) => {
