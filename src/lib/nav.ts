@@ -14,21 +14,25 @@ const BY_ROLE: Record<Role, NavItem[]> = {
 		{ href: '/admin/tokens', label: 'API tokens' },
 		{ href: '/admin/audit', label: 'Audit trail' },
 		{ href: '/procedures', label: 'Procedures' },
-		{ href: '/welders', label: 'Welders' }
+		{ href: '/welders', label: 'Welders' },
+		{ href: '/jobs', label: 'Jobs' }
 	],
 	engineer: [
 		{ href: '/records', label: 'Bench records' },
 		{ href: '/procedures', label: 'Procedures' },
 		{ href: '/pqrs', label: 'PQRs' },
-		{ href: '/welders', label: 'Welders' }
+		{ href: '/welders', label: 'Welders' },
+		{ href: '/jobs', label: 'Jobs' }
 	],
 	inspector: [
 		{ href: '/reviews', label: 'Review desk' },
 		{ href: '/procedures', label: 'Procedures' },
-		{ href: '/welders', label: 'Welders' }
+		{ href: '/welders', label: 'Welders' },
+		{ href: '/jobs', label: 'Jobs' }
 	],
 	welder: [
 		{ href: '/booth', label: 'Booth' },
+		{ href: '/jobs', label: 'Jobs' },
 		{ href: '/welders/me', label: 'My qualifications' }
 	]
 };

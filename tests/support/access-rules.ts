@@ -45,6 +45,8 @@ export const ACCESS_RULES: Record<string, Access> = {
 	'GET /admin/shop': roles(ADMIN),
 	'GET /admin/tokens': roles(ADMIN),
 	'GET /api/v1/health': pub(),
+	'GET /api/v1/jobs': members,
+	'GET /api/v1/jobs/[id=id]': members,
 	'GET /api/v1/pqrs': roles(VIEW),
 	'GET /api/v1/pqrs/[id=id]': roles(VIEW),
 	'GET /api/v1/procedures': roles(VIEW),
@@ -58,6 +60,10 @@ export const ACCESS_RULES: Record<string, Access> = {
 	'GET /booth': members,
 	'GET /help/checks': pub(),
 	'GET /offline': pub(), // the service worker's "not on this phone" page: names nobody
+	'GET /jobs': members, // the welder opens a job to log a weld
+	'GET /jobs/[id=id]/weld-log.csv': members,
+	'GET /jobs/[id=id]': members,
+	'GET /jobs/new': roles(AUTHOR),
 	'GET /invite/[token]': pub([404, 410]), // no live invite token can be read back (hashed)
 	'GET /pqrs': roles(VIEW),
 	'GET /pqrs/[id=id]': roles(VIEW),
@@ -131,6 +137,13 @@ export const ACCESS_RULES: Record<string, Access> = {
 	'POST /api/v1/welders/[id=id]/qualifications': roles(MANAGE),
 	'POST /b/[token]?/used': members,
 	'POST /invite/[token]?/accept': pub([400, 404, 410]),
+	'POST /jobs/[id=id]?/addJoint': roles(AUTHOR),
+	'POST /jobs/[id=id]?/importJoints': roles(AUTHOR),
+	'POST /jobs/[id=id]?/log': roles(['welder']), // only the welder logs their own weld
+	'POST /jobs/[id=id]?/override': roles(REVIEW), // an inspector's signed override
+	'POST /jobs/[id=id]?/inspect': roles(REVIEW),
+	'POST /jobs/[id=id]?/repair': roles(['admin', 'engineer', 'inspector']),
+	'POST /jobs/new': roles(AUTHOR),
 	'POST /pqrs/[id=id]?/addendum': roles(AUTHOR),
 	'POST /pqrs/[id=id]?/certify': roles(CERTIFY),
 	'POST /pqrs/[id=id]?/upload': roles(AUTHOR),

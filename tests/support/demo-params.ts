@@ -73,6 +73,15 @@ const BY_AREA: [RegExp, (db: SqliteFile, shop: number) => Promise<Params | undef
 				[shop]
 			)
 	],
+	[
+		/^\/(api\/v1\/)?jobs\b/,
+		(db, shop) =>
+			db.get(
+				`SELECT j.id, x.id AS joint FROM jobs j LEFT JOIN job_joints x ON x.job_id = j.id
+				 WHERE j.shop_id = ? ORDER BY j.id, x.id LIMIT 1`,
+				[shop]
+			)
+	],
 	// Invite tokens are stored hashed: no live one can be read back, so a made-up one is used.
 	[/^\/invite\b/, async () => ({ token: 'no-such-invite-token-0000000000000000' })]
 ];

@@ -90,7 +90,16 @@ export const ACTION_WORDS: Readonly<Record<string, ActionWords>> = {
 	'invite.revoked': a('Invite withdrawn', 'withdrew an invite'),
 	'invite.accepted': a('Invite accepted', 'accepted the invite'),
 	'api-token.created': a('API token created', 'created an API token'),
-	'api-token.revoked': a('API token withdrawn', 'withdrew an API token')
+	'api-token.revoked': a('API token withdrawn', 'withdrew an API token'),
+	// jobs, joints, the weld log and inspections (issue #17)
+	'job.created': a('Job opened', 'opened the job'),
+	'job.joint_added': a('Joint added', 'added a joint to the job'),
+	'job.joints_imported': a('Joint list added', 'added the joints of a pasted list to the job'),
+	'job.signature_refused': a('Signature refused', 'tried to sign with a wrong password'),
+	'weld.logged': a('Weld logged', 'logged passes welded on the joint'),
+	'weld.override_signed': a('Override signed', 'signed an override for a refused weld log'),
+	'joint.inspected': a('Joint inspected', 'inspected the joint and signed the result'),
+	'joint.repair_opened': a('Repair opened', 'opened a repair of the rejected joint')
 };
 
 /** The words for a code; one no table knows reads from its own words ("pqr.reopened" → …). */

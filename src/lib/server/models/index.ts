@@ -78,3 +78,5 @@ export {
 } from './welders';
 
 export { ContinuityTap } from './continuity-tap';
+
+export { Job, JobJoint, JointInspection, JointRepair, WeldLog, WeldOverride } from './jobs';

@@ -6,6 +6,7 @@ import { seedWelders } from './seed-welders';
 import { seedProcedures } from './seed-procedures';
 import { seedIsoPqr, seedIsoProcedure } from './seed-iso';
 import { seedRecords } from './seed-records';
+import { seedJobs } from './seed-jobs';
 
 async function seedShop(name: string, people: DemoPerson[]): Promise<Shop> {
 	const hashes = await Promise.all(people.map((p) => hashPassword(p.password)));
@@ -42,5 +43,6 @@ export async function seedDemo(): Promise<{ shop: Shop; other: Shop }> {
 	await seedProcedures(shop);
 	await seedIsoPqr(shop);
 	await seedIsoProcedure(shop);
+	await seedJobs(shop);
 	return { shop, other };
 }

@@ -1,6 +1,7 @@
 // The continuity log: dated uses of a process per welder, from a booth tap or entered by an
 // engineer or admin, and the ISO 9606-1 six-monthly confirmations.
 import type { RequestEvent } from '@sveltejs/kit';
+import type { Transaction } from 'sequelize';
 import type { Process } from '$lib/weld';
 import { parseDate } from '$lib/weld/continuity';
 import { audit } from '../audit';
@@ -92,27 +93,15 @@ export async function recordContinuity(input: RecordContinuityInput): Promise<Re
 		}
 
 		const now = new Date();
-		// Once per welder, process and day: the unique index decides, whichever process tapped first.
-		const created = await insertUnlessDuplicate(
-			ContinuityEntry,
-			{
-				shopId: input.shopId,
-				welderId: welder.id,
-				process: input.process,
-				usedOn,
-				source: input.source,
-				note,
-				recordedById: recorder.id,
-				recordedByName: recorder.name,
-				createdAt: now,
-				updatedAt: now
-			},
-			t
-		);
-		const entry = await ContinuityEntry.findOne({
-			where: { welderId: welder.id, process: input.process, usedOn },
-			transaction: t,
-			rejectOnEmpty: true
+		const { entry, created } = await logUse(t, {
+			shopId: input.shopId,
+			welder,
+			process: input.process,
+			usedOn,
+			source: input.source,
+			note,
+			recorder,
+			now
 		});
 		// A second arrival of the same tap id fails the unique index here and rolls all of it back.
 		if (input.tap)
@@ -157,6 +146,49 @@ export async function recordContinuity(input: RecordContinuityInput): Promise<Re
 			created
 		};
 	});
+}
+
+/**
+ * Inside a write: one use of a process by a welder on a day, unless that day is logged already
+ * (the unique index decides, whichever process tapped first). Shared by the booth tap, the manual
+ * entry and the job weld log (which records it in the same transaction as the weld).
+ */
+export async function logUse(
+	t: Transaction,
+	u: {
+		shopId: number;
+		welder: Welder;
+		process: Process;
+		usedOn: string;
+		source: ContinuitySource;
+		note: string | null;
+		recorder: User;
+		now?: Date;
+	}
+): Promise<{ entry: ContinuityEntry; created: boolean }> {
+	const now = u.now ?? new Date();
+	const created = await insertUnlessDuplicate(
+		ContinuityEntry,
+		{
+			shopId: u.shopId,
+			welderId: u.welder.id,
+			process: u.process,
+			usedOn: u.usedOn,
+			source: u.source,
+			note: u.note,
+			recordedById: u.recorder.id,
+			recordedByName: u.recorder.name,
+			createdAt: now,
+			updatedAt: now
+		},
+		t
+	);
+	const entry = await ContinuityEntry.findOne({
+		where: { welderId: u.welder.id, process: u.process, usedOn: u.usedOn },
+		transaction: t,
+		rejectOnEmpty: true
+	});
+	return { entry, created };
 }
 
 /** ISO 9606-1: the employer's responsible person confirms the qualification (every 6 months). */

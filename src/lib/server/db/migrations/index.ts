@@ -10,6 +10,7 @@ import * as sharedState from './0008-shared-state';
 import * as recordsSearch from './0009-records-search';
 import * as continuityTaps from './0010-continuity-taps';
 import * as governingCode from './0011-governing-code';
+import * as jobs from './0012-jobs';
 
 export interface Migration {
 	name: string;
@@ -30,5 +31,6 @@ export const migrations: Migration[] = [
 	{ name: '0008-shared-state', ...sharedState },
 	{ name: '0009-records-search', ...recordsSearch },
 	{ name: '0010-continuity-taps', ...continuityTaps },
-	{ name: '0011-governing-code', ...governingCode }
+	{ name: '0011-governing-code', ...governingCode },
+	{ name: '0012-jobs', ...jobs }
 ];

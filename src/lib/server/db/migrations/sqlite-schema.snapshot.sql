@@ -22,6 +22,10 @@ CREATE UNIQUE INDEX `continuity_entries_welder_id_process_used_on` ON `continuit
 
 CREATE INDEX `continuity_taps_shop_id_received_at` ON `continuity_taps` (`shop_id`, `received_at`);
 
+CREATE INDEX `job_joints_shop_id_revision_id` ON `job_joints` (`shop_id`, `revision_id`);
+
+CREATE INDEX `joint_inspections_joint_id` ON `joint_inspections` (`joint_id`);
+
 CREATE UNIQUE INDEX `lapse_notices_qualification_id_lapses_on_kind` ON `lapse_notices` (`qualification_id`, `lapses_on`, `kind`);
 
 CREATE INDEX `pqr_addenda_shop_id_pqr_id` ON `pqr_addenda` (`shop_id`, `pqr_id`);
@@ -96,6 +100,10 @@ CREATE INDEX `verification_links_shop_id_welder_id` ON `verification_links` (`sh
 
 CREATE UNIQUE INDEX `verification_links_token` ON `verification_links` (`token`);
 
+CREATE INDEX `weld_logs_shop_id_welder_id` ON `weld_logs` (`shop_id`, `welder_id`);
+
+CREATE INDEX `weld_overrides_joint_id_welder_id` ON `weld_overrides` (`joint_id`, `welder_id`);
+
 CREATE INDEX `welders_shop_id_name` ON `welders` (`shop_id`, `name`);
 
 CREATE UNIQUE INDEX `welders_shop_id_stamp` ON `welders` (`shop_id`, `stamp`);
@@ -118,9 +126,19 @@ CREATE TABLE `continuity_entries` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop
 
 CREATE TABLE "continuity_taps" (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `user_id` UUID NOT NULL REFERENCES `users` (`id`), `client_id` VARCHAR(64) NOT NULL, `link_id` INTEGER REFERENCES `booth_links` (`id`), `continuity_entry_id` INTEGER REFERENCES `continuity_entries` (`id`), `outcome` VARCHAR(12) NOT NULL, `message` VARCHAR(300), `made_at` DATETIME NOT NULL, `received_at` DATETIME NOT NULL, CONSTRAINT `continuity_taps_user_client_unique` UNIQUE (`user_id`, `client_id`));
 
+CREATE TABLE "data_books" (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `job_id` INTEGER NOT NULL REFERENCES `jobs` (`id`), `token` VARCHAR(64) NOT NULL, `manifest` TEXT NOT NULL, `manifest_digest` VARCHAR(64) NOT NULL, `made_by_id` UUID NOT NULL REFERENCES `users` (`id`), `made_at` DATETIME NOT NULL, CONSTRAINT `data_books_token_unique` UNIQUE (`token`));
+
 CREATE TABLE `invites` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `email` VARCHAR(254) NOT NULL, `name` VARCHAR(120) NOT NULL, `role` VARCHAR(20) NOT NULL, `token_hash` VARCHAR(64) NOT NULL UNIQUE, `expires_at` DATETIME NOT NULL, `used_at` DATETIME, `invited_by_id` UUID NOT NULL REFERENCES `users` (`id`), `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL);
 
+CREATE TABLE "job_joints" (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `job_id` INTEGER NOT NULL REFERENCES `jobs` (`id`), `mark` VARCHAR(20) NOT NULL, `joint_type` VARCHAR(12) NOT NULL, `size` VARCHAR(40) NOT NULL, `base_metals` VARCHAR(120) NOT NULL, `position` VARCHAR(4) NOT NULL, `revision_id` INTEGER NOT NULL REFERENCES `procedure_revisions` (`id`), `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL, CONSTRAINT `job_joints_job_mark_unique` UNIQUE (`job_id`, `mark`));
+
 CREATE TABLE `job_leases` (`name` VARCHAR(60) NOT NULL PRIMARY KEY, `holder` VARCHAR(120) NOT NULL DEFAULT '', `lease_until` BIGINT NOT NULL DEFAULT 0, `runs` INTEGER NOT NULL DEFAULT 0, `last_run_at` DATETIME);
+
+CREATE TABLE "jobs" (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `number` VARCHAR(40) NOT NULL, `customer` VARCHAR(120) NOT NULL, `part` VARCHAR(120) NOT NULL, `drawing` VARCHAR(60) NOT NULL, `drawing_rev` VARCHAR(20) NOT NULL, `code` VARCHAR(16) NOT NULL, `due_on` DATE, `created_by_id` UUID NOT NULL REFERENCES `users` (`id`), `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL, CONSTRAINT `jobs_shop_number_unique` UNIQUE (`shop_id`, `number`));
+
+CREATE TABLE `joint_inspections` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `joint_id` INTEGER NOT NULL REFERENCES `job_joints` (`id`), `method` VARCHAR(2) NOT NULL, `extent` VARCHAR(60) NOT NULL, `result` VARCHAR(8) NOT NULL, `note` VARCHAR(500), `report_key` VARCHAR(80), `report_name` VARCHAR(200), `report_sha256` VARCHAR(64), `signed_by_id` UUID NOT NULL REFERENCES `users` (`id`), `printed_name` VARCHAR(120) NOT NULL, `role` VARCHAR(20) NOT NULL, `signed_at` DATETIME NOT NULL, `digest` VARCHAR(64) NOT NULL, `canonical` TEXT NOT NULL, `seal` VARCHAR(64) NOT NULL);
+
+CREATE TABLE "joint_repairs" (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `joint_id` INTEGER NOT NULL REFERENCES `job_joints` (`id`), `inspection_id` INTEGER NOT NULL REFERENCES `joint_inspections` (`id`), `round` INTEGER NOT NULL, `revision_id` INTEGER NOT NULL REFERENCES `procedure_revisions` (`id`), `welder_id` INTEGER NOT NULL REFERENCES `welders` (`id`), `note` VARCHAR(500), `recorded_by_id` UUID NOT NULL REFERENCES `users` (`id`), `recorded_by_name` VARCHAR(120) NOT NULL, `created_at` DATETIME NOT NULL, CONSTRAINT `joint_repairs_joint_round_unique` UNIQUE (`joint_id`, `round`));
 
 CREATE TABLE `lapse_notices` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `qualification_id` INTEGER NOT NULL REFERENCES `qualifications` (`id`), `lapses_on` DATE NOT NULL, `kind` VARCHAR(8) NOT NULL, `recipients` TEXT NOT NULL DEFAULT '', `sent_at` DATETIME, `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL);
 
@@ -180,6 +198,10 @@ CREATE TABLE `verification_links` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop
 
 CREATE TABLE `verification_tokens` (`token` VARCHAR(255) PRIMARY KEY, `identifier` VARCHAR(255) NOT NULL, `expires` DATETIME NOT NULL);
 
+CREATE TABLE "weld_logs" (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `joint_id` INTEGER NOT NULL REFERENCES `job_joints` (`id`), `welder_id` INTEGER NOT NULL REFERENCES `welders` (`id`), `pass` VARCHAR(8) NOT NULL, `welded_on` DATE NOT NULL, `revision_id` INTEGER NOT NULL REFERENCES `procedure_revisions` (`id`), `round` INTEGER NOT NULL DEFAULT 0, `override_id` INTEGER REFERENCES `weld_overrides` (`id`), `continuity_entry_id` INTEGER REFERENCES `continuity_entries` (`id`), `recorded_by_id` UUID NOT NULL REFERENCES `users` (`id`), `recorded_by_name` VARCHAR(120) NOT NULL, `created_at` DATETIME NOT NULL, CONSTRAINT `weld_logs_joint_pass_unique` UNIQUE (`joint_id`, `round`, `pass`));
+
+CREATE TABLE `weld_overrides` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `joint_id` INTEGER NOT NULL REFERENCES `job_joints` (`id`), `welder_id` INTEGER NOT NULL REFERENCES `welders` (`id`), `refusal` VARCHAR(500) NOT NULL, `reason` VARCHAR(500) NOT NULL, `signed_by_id` UUID NOT NULL REFERENCES `users` (`id`), `printed_name` VARCHAR(120) NOT NULL, `role` VARCHAR(20) NOT NULL, `signed_at` DATETIME NOT NULL, `digest` VARCHAR(64) NOT NULL, `canonical` TEXT NOT NULL, `seal` VARCHAR(64) NOT NULL);
+
 CREATE TABLE `welders` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `name` VARCHAR(120) NOT NULL, `stamp` VARCHAR(20) NOT NULL, `user_id` UUID REFERENCES `users` (`id`), `email` VARCHAR(254), `active` TINYINT(1) NOT NULL DEFAULT 1, `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL);
 
 CREATE TABLE `window_counters` (`key` VARCHAR(320) NOT NULL PRIMARY KEY, `hits` INTEGER NOT NULL DEFAULT 0, `window_end` BIGINT NOT NULL);
@@ -189,6 +211,24 @@ CREATE TRIGGER audit_events_no_delete BEFORE DELETE ON audit_events
 
 CREATE TRIGGER audit_events_no_update BEFORE UPDATE ON audit_events
 		BEGIN SELECT RAISE(ABORT, 'audit events are append-only'); END;
+
+CREATE TRIGGER data_books_no_delete BEFORE DELETE ON data_books
+			BEGIN SELECT RAISE(ABORT, 'data_books are append-only'); END;
+
+CREATE TRIGGER data_books_no_update BEFORE UPDATE ON data_books
+			BEGIN SELECT RAISE(ABORT, 'data_books are append-only'); END;
+
+CREATE TRIGGER joint_inspections_no_delete BEFORE DELETE ON joint_inspections
+			BEGIN SELECT RAISE(ABORT, 'joint_inspections are append-only'); END;
+
+CREATE TRIGGER joint_inspections_no_update BEFORE UPDATE ON joint_inspections
+			BEGIN SELECT RAISE(ABORT, 'joint_inspections are append-only'); END;
+
+CREATE TRIGGER joint_repairs_no_delete BEFORE DELETE ON joint_repairs
+			BEGIN SELECT RAISE(ABORT, 'joint_repairs are append-only'); END;
+
+CREATE TRIGGER joint_repairs_no_update BEFORE UPDATE ON joint_repairs
+			BEGIN SELECT RAISE(ABORT, 'joint_repairs are append-only'); END;
 
 CREATE TRIGGER pqr_addenda_no_delete BEFORE DELETE ON pqr_addenda
 			BEGIN SELECT RAISE(ABORT, 'pqr_addenda are append-only'); END;
@@ -237,3 +277,15 @@ CREATE TRIGGER sign_offs_no_delete BEFORE DELETE ON sign_offs
 
 CREATE TRIGGER sign_offs_no_update BEFORE UPDATE ON sign_offs
 			BEGIN SELECT RAISE(ABORT, 'sign_offs are append-only'); END;
+
+CREATE TRIGGER weld_logs_no_delete BEFORE DELETE ON weld_logs
+			BEGIN SELECT RAISE(ABORT, 'weld_logs are append-only'); END;
+
+CREATE TRIGGER weld_logs_no_update BEFORE UPDATE ON weld_logs
+			BEGIN SELECT RAISE(ABORT, 'weld_logs are append-only'); END;
+
+CREATE TRIGGER weld_overrides_no_delete BEFORE DELETE ON weld_overrides
+			BEGIN SELECT RAISE(ABORT, 'weld_overrides are append-only'); END;
+
+CREATE TRIGGER weld_overrides_no_update BEFORE UPDATE ON weld_overrides
+			BEGIN SELECT RAISE(ABORT, 'weld_overrides are append-only'); END;

@@ -1,0 +1,75 @@
+import {
+	DataTypes,
+	Model,
+	type CreationOptional,
+	type InferAttributes,
+	type InferCreationAttributes
+} from 'sequelize';
+import { sequelize } from '../db/sequelize';
+
+/** A job of the shop: one part or drawing for a customer, welded to a governing code. */
+export class Job extends Model<InferAttributes<Job>, InferCreationAttributes<Job>> {
+	declare id: CreationOptional<number>;
+	declare shopId: number;
+	/** The shop's job number; unique in the shop. */
+	declare number: string;
+	declare customer: string;
+	declare part: string;
+	declare drawing: string;
+	declare drawingRev: string;
+	declare code: string;
+	declare dueOn: string | null;
+	declare createdById: string;
+	declare createdAt: CreationOptional<Date>;
+	declare updatedAt: CreationOptional<Date>;
+}
+
+Job.init(
+	{
+		id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
+		shopId: { type: DataTypes.INTEGER, allowNull: false },
+		number: { type: DataTypes.STRING(40), allowNull: false },
+		customer: { type: DataTypes.STRING(120), allowNull: false },
+		part: { type: DataTypes.STRING(120), allowNull: false },
+		drawing: { type: DataTypes.STRING(60), allowNull: false },
+		drawingRev: { type: DataTypes.STRING(20), allowNull: false },
+		code: { type: DataTypes.STRING(16), allowNull: false },
+		dueOn: { type: DataTypes.DATEONLY, allowNull: true },
+		createdById: { type: DataTypes.UUID, allowNull: false },
+		createdAt: DataTypes.DATE,
+		updatedAt: DataTypes.DATE
+	},
+	{ sequelize, tableName: 'jobs' }
+);
+
+/** One weld of a job, named by the shop's mark (W1, W2 …), to be welded to one revision. */
+export class JobJoint extends Model<InferAttributes<JobJoint>, InferCreationAttributes<JobJoint>> {
+	declare id: CreationOptional<number>;
+	declare shopId: number;
+	declare jobId: number;
+	declare mark: string;
+	declare jointType: string;
+	declare size: string;
+	declare baseMetals: string;
+	declare position: string;
+	declare revisionId: number;
+	declare createdAt: CreationOptional<Date>;
+	declare updatedAt: CreationOptional<Date>;
+}
+
+JobJoint.init(
+	{
+		id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
+		shopId: { type: DataTypes.INTEGER, allowNull: false },
+		jobId: { type: DataTypes.INTEGER, allowNull: false },
+		mark: { type: DataTypes.STRING(20), allowNull: false },
+		jointType: { type: DataTypes.STRING(12), allowNull: false },
+		size: { type: DataTypes.STRING(40), allowNull: false },
+		baseMetals: { type: DataTypes.STRING(120), allowNull: false },
+		position: { type: DataTypes.STRING(4), allowNull: false },
+		revisionId: { type: DataTypes.INTEGER, allowNull: false },
+		createdAt: DataTypes.DATE,
+		updatedAt: DataTypes.DATE
+	},
+	{ sequelize, tableName: 'job_joints' }
+);

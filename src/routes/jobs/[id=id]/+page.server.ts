@@ -1,0 +1,178 @@
+import { fail, message, superValidate } from 'sveltekit-superforms';
+import { zod4 } from '$lib/forms/zod4';
+import { requireRole } from '$lib/server/auth/guards';
+import {
+	addJoint,
+	CSV_EXAMPLE,
+	importJoints,
+	JOB_AUTHOR_ROLES,
+	JOB_VIEW_ROLES,
+	jobView,
+	JointListError,
+	INSPECT_ROLES,
+	logWeld,
+	recordInspection,
+	recordOverride,
+	recordRepair,
+	REPAIR_ROLES,
+	WELD_ROLES
+} from '$lib/server/fabrication';
+import { postedForm } from '$lib/server/forms/posted-form';
+import { Procedure, Welder } from '$lib/server/models';
+import { refuseForm, rethrowAsHttp } from '$lib/server/people/form-errors';
+import {
+	inspectionSchema,
+	jointCsvSchema,
+	jointSchema,
+	overrideSchema,
+	repairSchema,
+	weldLogSchema
+} from '$lib/schemas/job';
+import { jobCounts } from '$lib/jobs/status';
+import { refusal } from '$lib/server/procedures/form-errors';
+import type { Actions, PageServerLoad } from './$types';
+
+const jointForm = zod4(jointSchema);
+const csvForm = zod4(jointCsvSchema);
+const overrideForm = zod4(overrideSchema);
+const inspectionForm = zod4(inspectionSchema);
+const repairForm = zod4(repairSchema);
+
+export const load: PageServerLoad = async (event) => {
+	const user = requireRole(event, ...JOB_VIEW_ROLES);
+	const job = await jobView(user, Number(event.params.id)).catch(rethrowAsHttp);
+	const canEdit = JOB_AUTHOR_ROLES.includes(user.role);
+	return {
+		job,
+		canEdit,
+		canLog: WELD_ROLES.includes(user.role),
+		canInspect: INSPECT_ROLES.includes(user.role),
+		canRepair: REPAIR_ROLES.includes(user.role),
+		counts: jobCounts(job.joints.map((j) => j.history)),
+		welders: REPAIR_ROLES.includes(user.role)
+			? (
+					await Welder.findAll({
+						where: { shopId: user.shopId, active: true },
+						order: [['name', 'ASC']]
+					})
+				).map((w) => ({ id: w.id, name: w.name, stamp: w.stamp }))
+			: [],
+		overrideForm: await superValidate(overrideForm, { id: 'override', errors: false }),
+		inspectionForm: await superValidate(
+			{ method: 'VT' as const, extent: '100 %', result: 'accept' as const },
+			inspectionForm,
+			{ id: 'inspect', errors: false }
+		),
+		repairForm: await superValidate(repairForm, { id: 'repair', errors: false }),
+		created: event.url.searchParams.has('created'),
+		csvExample: CSV_EXAMPLE,
+		procedures: canEdit
+			? (
+					await Procedure.findAll({
+						where: { shopId: user.shopId },
+						attributes: ['number', 'title'],
+						order: [['number', 'ASC']],
+						limit: 500
+					})
+				).map((p) => ({ number: p.number, title: p.title }))
+			: [],
+		jointForm: await superValidate(jointForm, { id: 'joint', errors: false }),
+		csvForm: await superValidate(csvForm, { id: 'csv', errors: false })
+	};
+};
+
+export const actions: Actions = {
+	addJoint: async (event) => {
+		const user = requireRole(event, ...JOB_AUTHOR_ROLES);
+		const form = await superValidate(await postedForm(event.request), jointForm, { id: 'joint' });
+		if (!form.valid) return fail(400, { form });
+		try {
+			await addJoint(user, Number(event.params.id), form.data, event);
+		} catch (e) {
+			return refuseForm(form, e);
+		}
+		return message(form, { tone: 'success' as const, text: `Joint ${form.data.mark} added.` });
+	},
+	importJoints: async (event) => {
+		const user = requireRole(event, ...JOB_AUTHOR_ROLES);
+		const form = await superValidate(await postedForm(event.request), csvForm, { id: 'csv' });
+		if (!form.valid) return fail(400, { form });
+		try {
+			const { ids } = await importJoints(user, Number(event.params.id), form.data.csv, event);
+			form.data.csv = '';
+			return message(form, {
+				tone: 'success' as const,
+				text: `${ids.length} joint${ids.length === 1 ? '' : 's'} added.`
+			});
+		} catch (e) {
+			// Every row's problem goes back with the pasted text, so it can be fixed in place.
+			if (e instanceof JointListError) {
+				form.message = { tone: 'error', text: e.message, problems: e.problems };
+				return fail(400, { form });
+			}
+			return refuseForm(form, e);
+		}
+	},
+	log: async (event) => {
+		const user = requireRole(event, ...WELD_ROLES);
+		const posted = await postedForm(event.request);
+		const jointId = Number(posted.get('jointId'));
+		const parsed = weldLogSchema.safeParse({ jointId, passes: posted.getAll('passes') });
+		if (!parsed.success)
+			return fail(400, {
+				log: { jointId, ok: false, text: parsed.error.issues[0]?.message ?? 'Tick a pass.' }
+			});
+		try {
+			const r = await logWeld(user, parsed.data, event);
+			const text = `Logged ${r.logged.join(', ')}${r.already.length ? `; ${r.already.join(', ')} already logged` : ''}.`;
+			return { log: { jointId, ok: true, text } };
+		} catch (e) {
+			const r = refusal(e);
+			return fail(r.status, { log: { jointId, ok: false, text: r.message } });
+		}
+	},
+	override: async (event) => {
+		const user = requireRole(event, ...INSPECT_ROLES);
+		const form = await superValidate(await postedForm(event.request), overrideForm, {
+			id: 'override'
+		});
+		const input = { ...form.data };
+		form.data.password = ''; // the password is never sent back
+		if (!form.valid) return fail(400, { form });
+		try {
+			await recordOverride(user, input, event);
+		} catch (e) {
+			return refuseForm(form, e);
+		}
+		return message(form, { tone: 'success' as const, text: 'Override signed.' });
+	},
+	inspect: async (event) => {
+		const user = requireRole(event, ...INSPECT_ROLES);
+		const form = await superValidate(await postedForm(event.request), inspectionForm, {
+			id: 'inspect'
+		});
+		const input = { ...form.data };
+		form.data.password = ''; // the password is never sent back
+		if (!form.valid) return fail(400, { form });
+		try {
+			await recordInspection(user, input, event);
+		} catch (e) {
+			return refuseForm(form, e);
+		}
+		return message(form, { tone: 'success' as const, text: 'Inspection signed.' });
+	},
+	repair: async (event) => {
+		const user = requireRole(event, ...REPAIR_ROLES);
+		const form = await superValidate(await postedForm(event.request), repairForm, {
+			id: 'repair'
+		});
+		if (!form.valid) return fail(400, { form });
+		let round: number;
+		try {
+			({ round } = await recordRepair(user, form.data, event));
+		} catch (e) {
+			return refuseForm(form, e);
+		}
+		return message(form, { tone: 'success' as const, text: `Repair ${round} opened.` });
+	}
+};
