@@ -1,6 +1,6 @@
 // The demo job (issue #17): an invented trailer hitch frame for an invented customer, half done.
-// Its joints are welded to the demo shop's procedures in force; Tomas Whitlow has welded W1 to W3
-// today and Mirela Sand accepted W1 on sight; W4 to W6 wait for the welder. Idempotent: a job
+// Its joints are welded to the demo shop's procedures in force; Tomas Whitlow welded W1 to W3
+// two days before the seed ran (not today: a demo welder's booth tap today must still count) and Mirela Sand accepted W1 on sight; W4 to W6 wait for the welder. Idempotent: a job
 // whose number exists is left as it is.
 import { createJob, importJoints, jobView, logWeld, recordInspection } from '../fabrication';
 import { Job, type Shop } from '../models';
@@ -36,8 +36,9 @@ export async function seedJobs(shop: Shop): Promise<number | null> {
 	const password = DEMO_PEOPLE.find((p) => p.email === 'mirela@larkspur.example')?.password;
 	if (!tomas || !mirela || !password) return id;
 	const joints = (await jobView(reuben, id)).joints;
+	const weldedAt = new Date(Date.now() - 2 * 86_400_000);
 	for (const j of joints.filter((x) => ['W1', 'W2', 'W3'].includes(x.mark)))
-		await logWeld(tomas, { jointId: j.id, passes: j.passes });
+		await logWeld(tomas, { jointId: j.id, passes: j.passes }, null, weldedAt);
 	const w1 = joints.find((x) => x.mark === 'W1');
 	if (w1)
 		await recordInspection(mirela, {
