@@ -327,11 +327,21 @@ export const ISO_9606_1_VALIDITY: Source = {
 };
 
 export const ISO_6947: Source = {
-	label: 'ISO 6947 welding positions (PA to PH, PJ, H-L045, J-L045)',
+	label:
+		'ISO 6947 welding positions (PA to PH, PJ, H-L045, J-L045) and their ASME/AWS test positions',
 	edition:
-		'ISO 6947:2011/2019. PA-PG (main positions) read from a public reprint of the ISO 6947 text and a welding course page (corso-saldatura.it); PH, PJ, H-L045 and J-L045 with their directions (up, down) as ISO 9606-1:2012 5.8 and Tables 9, 10 use them. ASME/AWS equivalents: 1G/1F PA, 2F PB, 2G PC, 4F PD, 4G PE read in a public position chart that cites BS EN ISO 15614-1, ASME IX and AWS D1.1; 3G, 3F, 5G, 5F, 6G recalled',
+		'ISO 6947:2011 Annex B (informative), Table B.1, read in GOST R ISO 6947-2017, a national adoption identical to ISO 6947:2011 (docs.cntd.ru/document/1200144942): 1G PA, 2G PC, 3G uphill PF, 3G downhill PG, 4G PE, 5G uphill PH, 5G downhill PJ, 6G uphill H-L045, 6G downhill J-L045, 1F PA, 1FR PA, 2F PB. 3F PF/PG read in a public course presentation on welding positions (2005), 4F PD in a public position chart citing BS EN ISO 15614-1, ASME IX and AWS D1.1; 6GR welded up, H-L045, read in an AWS underwater welding specification\u2019s test position figure (D3.6M Figure 5.4, public reprint)',
+	kind: 'published',
+	note: 'Annex B compares the designations; a qualification is still judged by the code it is made to.'
+};
+
+/** The two ASME/AWS rows of the ISO 6947 table whose equivalent was not read (2FR, 5F). */
+export const ISO_6947_RECALLED: Source = {
+	label: 'ISO 6947 equivalents of 2FR and 5F',
+	edition:
+		'recalled: 2FR (pipe rotated, horizontal fillet) as PB, 5F (pipe fixed, fillet) as PH up / PJ down; the rows of Table B.1 after 2F were not read',
 	kind: 'from memory',
-	note: 'Kept as from memory because the table mixes read and recalled rows; ISO 6947 Annex B (comparison of designations) was not read.'
+	note: 'Verify in ISO 6947:2011 Annex B before relying on it.'
 };
 
 export const EN_1011_2_CET: Source = {
