@@ -373,6 +373,14 @@ export const AWS_D1_1_QUALIFICATION: Source = {
 	note: 'Verify in the edition the contract names.'
 };
 
+export const AWS_D1_1_TABLE_9_10: Source = {
+	label: 'AWS D1.1/D1.1M:2015 Table 9.10 (WPS qualification, CJP groove welds on pipe or tubing)',
+	edition:
+		'D1.1/D1.1M:2015, Table 9.10 read from a public copy of the two pages (ro.scribd.com/document/435989338)',
+	kind: 'published',
+	note: 'Job-size test pipes: a test under 24 in qualifies the test diameter and over; 24 in and over qualifies 24 in and over. Standard test pipes (2 in Sch 80 or 3 in Sch 40; 6 in Sch 120 or 8 in Sch 80) have their own rows.'
+};
+
 export const AWS_D1_1_GMAW_S: Source = {
 	label: 'AWS D1.1/D1.1M 3.2.2: GMAW-S is not prequalified; its WPS is qualified by test',
 	edition:
