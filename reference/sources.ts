@@ -74,6 +74,14 @@ export const ASME_IX_QW_422_MEMORY: Source = {
 	kind: 'from memory'
 };
 
+export const ASME_IX_QW_422_2013_AL: Source = {
+	label: 'ASME BPVC Section IX QW/QB-422 (P-Numbers), aluminium fittings rows',
+	edition:
+		'BPVC IX 2013, the B361 fittings rows read from a public copy of the table (anyflip.com/pegaz/aval/basic/251-300)',
+	kind: 'published',
+	note: 'WP1100 P-21, WP3003 P-21, 5083 P-25, 5154 P-22, WP6061 P-23, WP6063 P-23 (fittings). Rows for the same alloys under other product specifications (B209 sheet and plate, B221 extrusions) were not read.'
+};
+
 export const ASME_IX_QW_432: Source = {
 	label: 'ASME BPVC Section IX QW-432 (F-Numbers)',
 	edition: 'BPVC IX 2010s editions (specification-to-F-Number grouping read from a public chart)',
@@ -84,6 +92,14 @@ export const ASME_IX_QW_432_MEMORY: Source = {
 	label: 'ASME BPVC Section IX QW-432 (F-Numbers)',
 	edition: 'recalled, no copy at hand',
 	kind: 'from memory'
+};
+
+export const AWS_D1_2_FILLER_GROUPS: Source = {
+	label: 'AWS D1.2/D1.2M:2014 Clause 3 filler metal groups F21 to F25 (aluminium)',
+	edition:
+		'D1.2/D1.2M:2014, the filler metal group table of Clause 3 read from a public copy of the page (scribd.com/document/528227606)',
+	kind: 'published',
+	note: 'F21: ER1100, ER1188; F22: ER5183, ER5356, ER5554, ER5556, ER5654; F23: ER4010, ER4043, ER4047, ER4145, ER4643; F24: ER4009 and cast rods; F25: ER2319. These are the group numbers of the ASME IX QW-432 aluminium F-Numbers; the QW-432 alloy rows themselves were not read, so for ASME work QW-432 governs where the two differ.'
 };
 
 export const ASME_IX_QW_442: Source = {
