@@ -436,6 +436,15 @@ export const ISO_14341_GUIDE: Source = {
 	note: 'G3Si1: Mn 1.30-1.60, Si 0.70-1.00 %; G4Si1: Mn 1.60-1.90, Si 0.80-1.20 %.'
 };
 
+export const ALUMINIUM_FILLER_SHEETS: Source = {
+	label:
+		'Filler maker\u2019s product data sheets: aluminium 4043 and 5356 wire and rod, ISO designation',
+	edition:
+		'published product sheets of one US aluminium filler maker, read in issue 15 (titles and addresses in reference/README.md)',
+	kind: 'common practice',
+	note: 'The 4043 sheet gives the ISO designation AlSi5, the 5356 sheet AlMg5Cr(A); both state AWS A5.10. One maker\u2019s certification of its own wire: read the certificate of the wire in use.'
+};
+
 export const ISO_FILLER_MEMORY: Source = {
 	label: 'ISO filler designation beside the AWS classification (recalled)',
 	edition:
