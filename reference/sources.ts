@@ -309,7 +309,8 @@ export const ISO_15614_1_LEVELS: Source = {
 export const ISO_TR_15608: Source = {
 	label: 'ISO/TR 15608 material grouping system (steels)',
 	edition: 'ISO/TR 15608:2017, group names recalled',
-	kind: 'from memory'
+	kind: 'from memory',
+	note: 'Groups 1 to 6 and sub-groups 1.1 to 1.4 read the same in the CR ISO 15608:2000 text (public copy); the 2017 names of groups 7 to 11 were not read, and a public summary of the grouping gives group 8 as Ni 31 % at most, not the 35 % recalled for 2017.'
 };
 
 export const ISO_9606_1_RANGES: Source = {
