@@ -6,7 +6,7 @@
 import { EventEmitter } from 'node:events';
 import fontkit from '@pdf-lib/fontkit';
 import type { PDFDocument } from 'pdf-lib';
-import { fontFiles, type PdfFonts } from './fonts';
+import { embedFonts, type Fontkit, type PdfFonts } from './fonts';
 
 type Font = ReturnType<typeof fontkit.create>;
 type Glyph = ReturnType<Font['glyphForCodePoint']>;
@@ -110,12 +110,5 @@ const sharedFontkit = {
 
 /** The three faces of fonts.ts, subset into this document, parsed only the first time. */
 export async function embedSharedFonts(doc: PDFDocument): Promise<PdfFonts> {
-	doc.registerFontkit(sharedFontkit as unknown as Parameters<PDFDocument['registerFontkit']>[0]);
-	const f = fontFiles();
-	const [regular, bold, mono] = await Promise.all([
-		doc.embedFont(f.regular, { subset: true }),
-		doc.embedFont(f.bold, { subset: true }),
-		doc.embedFont(f.mono, { subset: true })
-	]);
-	return { regular, bold, mono };
+	return embedFonts(doc, sharedFontkit as unknown as Fontkit);
 }

@@ -25,8 +25,11 @@ export function fontFiles(): Files {
 	return files;
 }
 
-export async function embedFonts(doc: PDFDocument): Promise<PdfFonts> {
-	doc.registerFontkit(fontkit);
+/** What pdf-lib takes as its font parser; font-cache.ts passes one that parses each file once. */
+export type Fontkit = Parameters<PDFDocument['registerFontkit']>[0];
+
+export async function embedFonts(doc: PDFDocument, kit: Fontkit = fontkit): Promise<PdfFonts> {
+	doc.registerFontkit(kit);
 	const f = fontFiles();
 	const [regular, bold, mono] = await Promise.all([
 		doc.embedFont(f.regular, { subset: true }),
