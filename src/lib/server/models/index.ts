@@ -1,4 +1,5 @@
 import { ApiToken } from './api-token';
+import { hasManyAs } from './associate';
 import { AuditEvent } from './audit-event';
 import { BoothLink, BoothLookup } from './booth-link';
 import { Account, Session, VerificationToken } from './auth-tables';
@@ -31,11 +32,12 @@ SettingsPhoto.belongsTo(SettingsRecord, { foreignKey: 'recordId' });
 // Procedures (issue #5): revisions, their PQR and record links, sign-offs; PQRs with reports.
 Procedure.hasMany(ProcedureRevision, { foreignKey: 'procedureId', as: 'revisions' });
 ProcedureRevision.belongsTo(Procedure, { foreignKey: 'procedureId' });
-ProcedureRevision.hasMany(SignOff, { foreignKey: 'revisionId', as: 'signOffs' });
-ProcedureRevision.hasMany(RevisionPqr, { foreignKey: 'revisionId', as: 'pqrLinks' });
-ProcedureRevision.hasMany(RevisionRecord, { foreignKey: 'revisionId', as: 'recordLinks' });
-Pqr.hasMany(PqrReport, { foreignKey: 'pqrId', as: 'reports' });
-Pqr.hasMany(PqrAddendum, { foreignKey: 'pqrId', as: 'addenda' });
+hasManyAs(ProcedureRevision, 'revisionId', {
+	signOffs: SignOff,
+	pqrLinks: RevisionPqr,
+	recordLinks: RevisionRecord
+});
+hasManyAs(Pqr, 'pqrId', { reports: PqrReport, addenda: PqrAddendum });
 
 // Booth links (issue #6): the sheet's QR link of a revision, and its lookups.
 ProcedureRevision.hasMany(BoothLink, { foreignKey: 'revisionId', as: 'boothLinks' });
@@ -68,14 +70,7 @@ export {
 	WindowCounter
 };
 
-export {
-	ContinuityEntry,
-	LapseNotice,
-	Qualification,
-	QualificationConfirmation,
-	VerificationLink,
-	Welder
-} from './welders';
+export * from './welders';
 
 export { ContinuityTap } from './continuity-tap';
 
