@@ -1,5 +1,5 @@
 // Helpers for the people services' tests only. Import it after DATABASE_FILE is set.
-import type { SessionUser } from '../auth/session-user';
+import { sessionUserOf, type SessionUser } from '../auth/session-user';
 import { migrate } from '../db';
 import { Shop, User } from '../models';
 import { createShop } from './create-shop';
@@ -14,16 +14,7 @@ export function uniqueEmail(label: string): string {
 export async function asSessionUser(userId: string): Promise<SessionUser> {
 	const u = await User.findByPk(userId, { rejectOnEmpty: true });
 	const shop = await Shop.findByPk(u.shopId, { rejectOnEmpty: true });
-	return {
-		id: u.id,
-		shopId: shop.id,
-		shopName: shop.name,
-		name: u.name,
-		email: u.email,
-		role: u.role,
-		unitSystem: u.unitSystem ?? shop.unitSystem,
-		timeZone: shop.timeZone
-	};
+	return sessionUserOf(u, shop, u.unitSystem ?? shop.unitSystem);
 }
 
 /** A fresh shop with its first admin (password "correct horse battery"). */

@@ -5,7 +5,7 @@
 import { Op } from 'sequelize';
 import { pqrFormSchema } from '$lib/schemas/pqr';
 import { revisionFormSchema } from '$lib/schemas/procedure';
-import type { SessionUser } from '../auth/session-user';
+import { sessionUserOf, type SessionUser } from '../auth/session-user';
 import { Procedure, SettingsRecord, type Shop, User } from '../models';
 import * as P from '../procedures';
 import { certifyPqr, createPqr } from '../pqrs';
@@ -16,18 +16,7 @@ const quiet = { notify: false };
 
 export async function member(email: string, shop: Shop): Promise<SessionUser | null> {
 	const u = await User.findOne({ where: { email, shopId: shop.id } });
-	return u
-		? {
-				id: u.id,
-				shopId: shop.id,
-				shopName: shop.name,
-				name: u.name,
-				email: u.email,
-				role: u.role,
-				unitSystem: 'imperial',
-				timeZone: shop.timeZone
-			}
-		: null;
+	return u ? sessionUserOf(u, shop, 'imperial') : null;
 }
 
 export async function seedProcedures(shop: Shop): Promise<number> {

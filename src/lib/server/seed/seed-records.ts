@@ -1,9 +1,9 @@
 // Invented bench records for the demo shop: the jobs of the brief's scenario, mostly sound, a
 // few with cautions (too hot for the rod, a thoriated tungsten, a small wire run hot).
 import { settingsRecordSchema } from '$lib/schemas/settings-record';
-import type { SessionUser } from '../auth/session-user';
-import { SettingsRecord, type Shop, User } from '../models';
+import { SettingsRecord, type Shop } from '../models';
 import { createRecord } from '../records';
+import { member } from './seed-procedures';
 
 type Template = Record<string, string>;
 
@@ -172,26 +172,11 @@ function dateFor(i: number): string {
 	return d.toISOString().slice(0, 10);
 }
 
-async function asMember(email: string, shop: Shop): Promise<SessionUser | null> {
-	const u = await User.findOne({ where: { email, shopId: shop.id } });
-	if (!u) return null;
-	return {
-		id: u.id,
-		shopId: shop.id,
-		shopName: shop.name,
-		name: u.name,
-		email: u.email,
-		role: u.role,
-		unitSystem: 'imperial',
-		timeZone: shop.timeZone
-	};
-}
-
 /** Idempotent: a shop that has any record already is left as it is. */
 export async function seedRecords(shop: Shop): Promise<number> {
 	if ((await SettingsRecord.count({ where: { shopId: shop.id } })) > 0) return 0;
-	const engineer = await asMember('reuben@larkspur.example', shop);
-	const admin = await asMember('dana@larkspur.example', shop);
+	const engineer = await member('reuben@larkspur.example', shop);
+	const admin = await member('dana@larkspur.example', shop);
 	if (!engineer) return 0;
 	for (const [i, [template, changes, outcome, defects]] of ROWS.entries()) {
 		const form = settingsRecordSchema.parse({

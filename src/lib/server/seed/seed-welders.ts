@@ -5,6 +5,7 @@
 // the two extras are added once each by their own key, also to welders seeded before them.
 import type { InferCreationAttributes } from 'sequelize';
 import { addCalendarMonths, formatDate, parseDate } from '$lib/weld/continuity';
+import { sessionUserOf } from '../auth/session-user';
 import { write } from '../db/write-queue';
 import { ContinuityEntry, Qualification, User, Welder, type Shop } from '../models';
 import { recordConfirmation } from '../welders/continuity';
@@ -154,16 +155,7 @@ const EXTRAS = (today: string) => [
 ];
 
 async function seedExtras(shop: Shop, admin: User, today: string): Promise<void> {
-	const actor = {
-		id: admin.id,
-		shopId: shop.id,
-		shopName: shop.name,
-		name: admin.name,
-		email: admin.email,
-		role: admin.role,
-		unitSystem: 'imperial' as const,
-		timeZone: shop.timeZone
-	};
+	const actor = sessionUserOf(admin, shop, 'imperial');
 	for (const x of EXTRAS(today)) {
 		const created = await write(async (t) => {
 			const w = await Welder.findOne({
