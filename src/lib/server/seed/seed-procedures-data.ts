@@ -1,5 +1,16 @@
 // The demo procedures' and PQRs' values, as the forms would post them. Invented data: the labs,
 // the numbers and the results are made up for the demo shop.
+/** The filler, tungsten and gas the demo shop runs on 304 tube: its PQR-003 and its records. */
+export const GTAW_304_KIT = {
+	fillerClass: 'ER308L',
+	fillerDiameter: '1/16',
+	tungstenClass: 'EWCe-2',
+	tungstenDiameter: '0.040',
+	gasName: 'argon',
+	gasFlow: '18',
+	baseMetalSpec: '304'
+};
+
 export const PQRS = [
 	{
 		number: 'PQR-001',
@@ -55,13 +66,7 @@ export const PQRS = [
 		amps: '55',
 		volts: '10',
 		travelSpeed: '5',
-		fillerClass: 'ER308L',
-		fillerDiameter: '1/16',
-		tungstenClass: 'EWCe-2',
-		tungstenDiameter: '0.040',
-		gasName: 'argon',
-		gasFlow: '18',
-		baseMetalSpec: '304',
+		...GTAW_304_KIT,
 		couponThickness: '0.065',
 		testPosition: '2G',
 		jointType: 'pipe',

@@ -4,6 +4,7 @@ import { settingsRecordSchema } from '$lib/schemas/settings-record';
 import { SettingsRecord, type Shop } from '../models';
 import { createRecord } from '../records';
 import { member } from './seed-procedures';
+import { GTAW_304_KIT } from './seed-procedures-data';
 
 type Template = Record<string, string>;
 
@@ -42,13 +43,7 @@ const GMAW_CS: Template = {
 const GTAW_SS: Template = {
 	process: 'GTAW',
 	currentType: 'DCEN',
-	fillerClass: 'ER308L',
-	fillerDiameter: '1/16',
-	tungstenClass: 'EWCe-2',
-	tungstenDiameter: '0.040',
-	gasName: 'argon',
-	gasFlow: '18',
-	baseMetalSpec: '304',
+	...GTAW_304_KIT,
 	thickness: '0.065',
 	jointType: 'butt',
 	position: '1G',
