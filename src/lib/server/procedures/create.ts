@@ -5,7 +5,6 @@ import type { StoredValues } from '$lib/records/display';
 import type { NewProcedureForm } from '$lib/schemas/procedure';
 import { variablesFromRecords } from '$lib/procedures/from-records';
 import { emptyVariables } from '$lib/procedures/variables';
-import { audit } from '../audit';
 import type { SessionUser } from '../auth/session-user';
 import { write } from '../db';
 import { lockShop } from '../db/locks';
@@ -14,6 +13,8 @@ import { RefusedError } from '../people/errors';
 import { actingMember, actorOf, AUTHOR_ROLES } from './access';
 import { syncHead } from './find';
 import { setLinks } from './links';
+import { audit } from '../audit';
+import { auditRevision } from './revision-audit';
 
 export async function createProcedure(
 	actor: SessionUser,
@@ -104,18 +105,9 @@ export async function createProcedure(
 			event,
 			t
 		);
-		await audit(
-			{
-				shopId: actor.shopId,
-				actor: who,
-				action: 'procedure_revision.created',
-				objectType: 'procedure_revision',
-				objectId: revision.id,
-				after: { rev: 1, state: 'draft', variables, ...links, fromRecords: links.recordIds }
-			},
-			event,
-			t
-		);
+		await auditRevision(t, event, revision, 'created', who, {
+			after: { rev: 1, state: 'draft', variables, ...links, fromRecords: links.recordIds }
+		});
 		return { id: procedure.id, rev: 1 };
 	});
 }

@@ -6,7 +6,6 @@
 import type { RequestEvent } from '@sveltejs/kit';
 import { Op, type Transaction } from 'sequelize';
 import { ROLE_LABELS } from '$lib/roles';
-import { audit } from '../audit';
 import { issueBoothLink } from '../booth/links';
 import { clearFailures, isLockedOut, recordFailure } from '../auth/failed-sign-ins';
 import { verifyPassword } from '../auth/password';
@@ -18,6 +17,7 @@ import { actingMember, actorOf, AlreadyDecidedError, REVIEW_ROLES } from './acce
 import { revisionContent, sealOf } from './digest';
 import { findProcedure, findRevision, readVariables, syncHead } from './find';
 import { notifyDecision } from './notify';
+import { auditRevision } from './revision-audit';
 
 export const WRONG_PASSWORD = 'That password is not right. Nothing was signed.';
 export const TOO_MANY_PASSWORDS =
@@ -107,46 +107,27 @@ async function decide(
 					{ state: 'superseded', supersededAt: now, supersededByRev: rev },
 					{ transaction: t }
 				);
-				await audit(
-					{
-						shopId: actor.shopId,
-						actor: who,
-						action: 'procedure_revision.superseded',
-						objectType: 'procedure_revision',
-						objectId: o.id,
-						before: { state: 'approved' },
-						after: { state: 'superseded', supersededByRev: rev }
-					},
-					event,
-					t
-				);
+				await auditRevision(t, event, o, 'superseded', who, {
+					before: { state: 'approved' },
+					after: { state: 'superseded', supersededByRev: rev }
+				});
 			}
 			await issueBoothLink(revision, t, me); // issue #6: the sheet's QR link, in this same transaction
 		}
 		await syncHead(procedureId, t);
-		await audit(
-			{
-				shopId: actor.shopId,
-				actor: who,
-				action:
-					d.meaning === 'approved' ? 'procedure_revision.approved' : 'procedure_revision.returned',
-				objectType: 'procedure_revision',
-				objectId: revision.id,
-				before: { state: 'in-review' },
-				after: {
-					state: next,
-					signOffId: signOff.id,
-					meaning: d.meaning,
-					printedName: me.name,
-					role: manifest.role,
-					signedAt: now.toISOString(),
-					comment: d.comment,
-					...(d.meaning === 'approved' ? { digest: content.digest } : {})
-				}
-			},
-			event,
-			t
-		);
+		await auditRevision(t, event, revision, d.meaning, who, {
+			before: { state: 'in-review' },
+			after: {
+				state: next,
+				signOffId: signOff.id,
+				meaning: d.meaning,
+				printedName: me.name,
+				role: manifest.role,
+				signedAt: now.toISOString(),
+				comment: d.comment,
+				...(d.meaning === 'approved' ? { digest: content.digest } : {})
+			}
+		});
 		return { procedure, revision, me, signOffId: signOff.id, digest: content.digest };
 	});
 }
@@ -190,18 +171,9 @@ export async function approveRevision(
 		const locked = await recordFailure(actor.email);
 		const revision = await findRevision(actor, procedureId, rev);
 		await write((t) =>
-			audit(
-				{
-					shopId: actor.shopId,
-					actor: actorOf(actor),
-					action: 'procedure_revision.signature_refused',
-					objectType: 'procedure_revision',
-					objectId: revision.id,
-					after: { reason: 'wrong password' }
-				},
-				event,
-				t
-			)
+			auditRevision(t, event, revision, 'signature_refused', actorOf(actor), {
+				after: { reason: 'wrong password' }
+			})
 		);
 		throw new RefusedError(locked ? TOO_MANY_PASSWORDS : WRONG_PASSWORD, 'password');
 	}

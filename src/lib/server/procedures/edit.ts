@@ -4,7 +4,6 @@ import type { RequestEvent } from '@sveltejs/kit';
 import type { RevisionForm, RevisionVariables } from '$lib/schemas/procedure';
 import { STATE_LABELS } from '$lib/procedures/options';
 import { deriveGroupings, formToVariables, recordIdsFrom } from '$lib/procedures/variables';
-import { audit } from '../audit';
 import type { SessionUser } from '../auth/session-user';
 import { write } from '../db';
 import { ProcedureRevision } from '../models';
@@ -12,6 +11,7 @@ import { RefusedError } from '../people/errors';
 import { actingMember, actorOf, AUTHOR_ROLES } from './access';
 import { findProcedure, findRevision, readVariables, syncHead } from './find';
 import { linksOf, setLinks } from './links';
+import { auditRevision } from './revision-audit';
 
 export const notDraftMessage = (rev: number, state: string) =>
 	state === 'in-review'
@@ -75,18 +75,9 @@ export async function saveDraft(
 			{ actor: actorOf(me), event, number: procedure.number }
 		);
 		await syncHead(procedureId, t);
-		await audit(
-			{
-				shopId: actor.shopId,
-				actor: actorOf(me),
-				action: 'procedure_revision.updated',
-				objectType: 'procedure_revision',
-				objectId: revision.id,
-				before,
-				after: { variables, ...links }
-			},
-			event,
-			t
-		);
+		await auditRevision(t, event, revision, 'updated', actorOf(me), {
+			before,
+			after: { variables, ...links }
+		});
 	});
 }

@@ -2,7 +2,6 @@
 // change is a conditional update inside one IMMEDIATE transaction with its audit event.
 import type { RequestEvent } from '@sveltejs/kit';
 import { Op } from 'sequelize';
-import { audit } from '../audit';
 import type { SessionUser } from '../auth/session-user';
 import { write } from '../db';
 import { Pqr, ProcedureRevision } from '../models';
@@ -11,6 +10,7 @@ import { actingMember, actorOf, AlreadyDecidedError, AUTHOR_ROLES } from './acce
 import { findProcedure, findRevision, readVariables, syncHead } from './find';
 import { linksOf, setLinks } from './links';
 import { notifyReviewRequested } from './notify';
+import { auditRevision } from './revision-audit';
 
 export interface Notified {
 	mailed: boolean;
@@ -48,19 +48,10 @@ export async function submitRevision(
 		);
 		if (n !== 1) throw new AlreadyDecidedError();
 		await syncHead(procedureId, t);
-		await audit(
-			{
-				shopId: actor.shopId,
-				actor: actorOf(me),
-				action: 'procedure_revision.submitted',
-				objectType: 'procedure_revision',
-				objectId: revision.id,
-				before: { state: 'draft' },
-				after: { state: 'in-review', submittedAt: now.toISOString() }
-			},
-			event,
-			t
-		);
+		await auditRevision(t, event, revision, 'submitted', actorOf(me), {
+			before: { state: 'draft' },
+			after: { state: 'in-review', submittedAt: now.toISOString() }
+		});
 		return { procedure, revision, me };
 	});
 	if (opts.notify === false) return { mailed: true };
@@ -98,19 +89,10 @@ export async function withdrawRevision(
 		if (n !== 1)
 			throw new AlreadyDecidedError('The revision changed meanwhile; nothing was withdrawn.');
 		await syncHead(procedureId, t);
-		await audit(
-			{
-				shopId: actor.shopId,
-				actor: actorOf(me),
-				action: 'procedure_revision.withdrawn',
-				objectType: 'procedure_revision',
-				objectId: revision.id,
-				before: { state: 'approved' },
-				after: { state: 'withdrawn', reason, withdrawnAt: now.toISOString() }
-			},
-			event,
-			t
-		);
+		await auditRevision(t, event, revision, 'withdrawn', actorOf(me), {
+			before: { state: 'approved' },
+			after: { state: 'withdrawn', reason, withdrawnAt: now.toISOString() }
+		});
 	});
 }
 
@@ -154,24 +136,15 @@ export async function startRevision(
 			number: procedure.number
 		});
 		await syncHead(procedureId, t);
-		await audit(
-			{
-				shopId: actor.shopId,
-				actor: actorOf(me),
-				action: 'procedure_revision.created',
-				objectType: 'procedure_revision',
-				objectId: revision.id,
-				after: {
-					rev,
-					state: 'draft',
-					copiedFrom: latest.rev,
-					variables: readVariables(latest).variables,
-					...links
-				}
-			},
-			event,
-			t
-		);
+		await auditRevision(t, event, revision, 'created', actorOf(me), {
+			after: {
+				rev,
+				state: 'draft',
+				copiedFrom: latest.rev,
+				variables: readVariables(latest).variables,
+				...links
+			}
+		});
 		return { rev };
 	});
 }
