@@ -103,27 +103,24 @@ export async function revisionContent(
 	return { canonical, json, digest: sha256Text(json) };
 }
 
-/** The seal binds a sign-off's manifestation (who, role, meaning, when, comment) to the digest. */
-export function sealOf(s: {
-	revisionId: number;
-	userId: string;
+interface Manifestation {
 	printedName: string;
 	role: string;
 	meaning: string;
 	comment: string | null;
 	signedAt: Date;
 	digest: string;
-}): string {
-	return digestOf({
-		revisionId: s.revisionId,
-		userId: s.userId,
-		printedName: s.printedName,
-		role: s.role,
-		meaning: s.meaning,
-		comment: s.comment,
-		signedAt: s.signedAt.toISOString(),
-		digest: s.digest
-	});
+}
+
+/** A sign-off's manifestation (who, role, meaning, when, comment, digest), as sealed and shown. */
+export function manifestationOf<M extends Manifestation>(s: M) {
+	const { printedName, role, meaning, comment, digest }: Omit<M, 'signedAt'> = s;
+	return { printedName, role, meaning, comment, signedAt: s.signedAt.toISOString(), digest };
+}
+
+/** The seal binds a sign-off's manifestation to the signer and the revision (keys sorted). */
+export function sealOf(s: Manifestation & { revisionId: number; userId: string }): string {
+	return digestOf({ revisionId: s.revisionId, userId: s.userId, ...manifestationOf(s) });
 }
 
 export interface Integrity {

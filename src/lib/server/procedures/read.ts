@@ -14,7 +14,7 @@ import type { SessionUser } from '../auth/session-user';
 import { write } from '../db';
 import { AuditEvent, Pqr, ProcedureRevision, SettingsRecord, SignOff, User } from '../models';
 import { AUTHOR_ROLES, REVIEW_ROLES } from './access';
-import { checkIntegrity, type Integrity } from './digest';
+import { checkIntegrity, manifestationOf, type Integrity } from './digest';
 import { findProcedure, findRevision, readVariables } from './find';
 import { linksOf } from './links';
 
@@ -251,15 +251,7 @@ export async function getRevision(
 			amps: x.amps,
 			outcome: x.outcome
 		})),
-		signOffs: signOffs.map((s) => ({
-			id: s.id,
-			printedName: s.printedName,
-			role: s.role,
-			meaning: s.meaning,
-			comment: s.comment,
-			signedAt: s.signedAt.toISOString(),
-			digest: s.digest
-		})),
+		signOffs: signOffs.map((s) => ({ id: s.id, ...manifestationOf(s) })),
 		integrity,
 		can: {
 			edit: author && state === 'draft',
