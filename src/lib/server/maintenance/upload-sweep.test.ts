@@ -14,8 +14,7 @@ const { newShop, addMember } = await import('../people/test-support');
 const { createRecord } = await import('../records');
 const { settingsRecordSchema } = await import('$lib/schemas/settings-record');
 const { sweepUploads, ORPHANED_DIR } = await import('./upload-sweep');
-const { S3Storage } = await import('../storage/s3');
-const { s3Settings } = await import('../storage/s3-settings');
+const { fakeBucket } = await import('../storage/test-support');
 const { objectName } = await import('../storage/backend');
 
 const up = (name: string) => join(dir, 'uploads', name.slice(0, 2), name);
@@ -62,16 +61,7 @@ describe('sweepUploads', () => {
 
 	it('in a bucket, moves an unreferenced object only once it is 15 minutes older than the start', async () => {
 		const fake = await startS3Fake();
-		const bucket = new S3Storage(
-			s3Settings({
-				bucket: fake.bucket,
-				region: '',
-				endpoint: fake.endpoint,
-				accessKeyId: 'S3RVER',
-				secretAccessKey: 'S3RVER',
-				forcePathStyle: ''
-			})
-		);
+		const bucket = fakeBucket(fake);
 		try {
 			const orphan = `${'9a'.repeat(16)}.jpg`;
 			for (const k of [orphan, ...kept]) await bucket.put(objectName(k), Buffer.from('x'));

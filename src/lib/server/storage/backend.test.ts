@@ -7,8 +7,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startS3Fake, type S3Fake } from '../../../../scripts/lib/s3-fake';
 import { keyOfName, objectName, readAll, type StorageBackend } from './backend';
 import { LocalStorage } from './local';
-import { S3Storage } from './s3';
-import { s3Settings } from './s3-settings';
+import { fakeBucket } from './test-support';
 
 let fake: S3Fake;
 const stores: Record<string, StorageBackend> = {};
@@ -16,16 +15,7 @@ const stores: Record<string, StorageBackend> = {};
 beforeAll(async () => {
 	fake = await startS3Fake();
 	stores.local = new LocalStorage(mkdtempSync(join(tmpdir(), 'beadline-backend-')));
-	stores.s3 = new S3Storage(
-		s3Settings({
-			bucket: fake.bucket,
-			region: '',
-			endpoint: fake.endpoint,
-			accessKeyId: 'S3RVER',
-			secretAccessKey: 'S3RVER',
-			forcePathStyle: ''
-		})
-	);
+	stores.s3 = fakeBucket(fake);
 });
 afterAll(async () => {
 	await stores.s3?.close();

@@ -7,8 +7,8 @@ import { startS3Fake, type S3Fake } from '../../../../scripts/lib/s3-fake';
 import { objectName, readAll, type StorageBackend } from './backend';
 import { copyUploads } from './copy';
 import { LocalStorage } from './local';
-import { S3Storage } from './s3';
-import { s3Settings } from './s3-settings';
+import type { S3Storage } from './s3';
+import { fakeBucket } from './test-support';
 
 let fake: S3Fake;
 let bucket: S3Storage;
@@ -16,16 +16,7 @@ const folder = () => new LocalStorage(mkdtempSync(join(tmpdir(), 'beadline-copy-
 
 beforeAll(async () => {
 	fake = await startS3Fake();
-	bucket = new S3Storage(
-		s3Settings({
-			bucket: fake.bucket,
-			region: '',
-			endpoint: fake.endpoint,
-			accessKeyId: 'S3RVER',
-			secretAccessKey: 'S3RVER',
-			forcePathStyle: ''
-		})
-	);
+	bucket = fakeBucket(fake);
 });
 afterAll(async () => {
 	await bucket.close();
