@@ -49,13 +49,13 @@ export const sha256Hex = (bytes: Uint8Array | string): string =>
 /** The exact bytes of manifest.json: readable (indented), one trailing newline. */
 export const manifestText = (m: Manifest): string => `${JSON.stringify(m, null, '\t')}\n`;
 
-/** A file name safe in any ZIP reader and file system: letters, digits, dot, dash, slash. */
+/** A file name safe in any ZIP reader and file system: letters, digits, dash, one dot, a folder. */
 export function zipName(folder: string, base: string, ext: string): string {
 	const safe =
 		base
 			.normalize('NFKD')
-			.replace(/[^A-Za-z0-9._-]+/g, '-')
-			.replace(/^[-.]+|-+$/g, '')
+			.replace(/[^A-Za-z0-9_-]+/g, '-')
+			.replace(/^-+|-+$/g, '')
 			.slice(0, 80) || 'file';
 	return `${folder ? `${folder}/` : ''}${safe}.${ext}`;
 }
