@@ -99,7 +99,7 @@ export const CHECK_CATALOGUE: readonly CatalogueEntry[] = [
 		'settings',
 		'Filler classification',
 		'Reads the AWS classification and what it encodes: spec, minimum tensile, F-Number, A-Number.',
-		[S.AWS_A5_CLASSIFICATION, S.ASME_IX_QW_432, S.ASME_IX_QW_442]
+		[S.AWS_A5_CLASSIFICATION, S.ASME_IX_QW_432, S.AWS_D1_2_FILLER_GROUPS, S.ASME_IX_QW_442]
 	),
 	e(
 		'filler-vs-base-metal',
@@ -113,7 +113,7 @@ export const CHECK_CATALOGUE: readonly CatalogueEntry[] = [
 		'settings',
 		'Base metal grouping',
 		'Spec and grade to family, P-Number and Group.',
-		[S.ASME_IX_QW_422, S.ASME_IX_QW_422_MEMORY]
+		[S.ASME_IX_QW_422, S.ASME_IX_QW_422_2013_AL, S.ASME_IX_QW_422_MEMORY]
 	),
 	e(
 		'preheat',
