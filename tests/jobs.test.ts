@@ -189,6 +189,14 @@ test('the data book of the half-done demo job: every digest holds, its QR opens 
 	await expect(anyone.getByTestId('book-compiled')).toContainText(`by ${engineer.name}`);
 	await expect(anyone.getByTestId('book-verdict')).toContainText('Matches');
 	await expect(anyone.getByTestId('book-files')).toContainText('weld-map-and-log-JOB-2026-014.pdf');
+	// A copy dropped on the check is hashed file by file against what the shop compiled.
+	await anyone
+		.getByLabel('The data book ZIP or manifest.json')
+		.setInputFiles(await download.path());
+	await anyone.getByRole('button', { name: 'Check this copy' }).click();
+	await expect(anyone.getByTestId('copy-verdict')).toContainText(
+		'the very data book the shop compiled'
+	);
 	await anyone.goto('/verify/no-such-token-000000000000');
 	await expect(anyone.getByTestId('book-error')).toBeVisible();
 });

@@ -144,6 +144,7 @@ export const ACCESS_RULES: Record<string, Access> = {
 	'POST /jobs/[id=id]?/override': roles(REVIEW), // an inspector's signed override
 	'POST /jobs/[id=id]?/inspect': roles(REVIEW),
 	'POST /jobs/[id=id]?/repair': roles(['admin', 'engineer', 'inspector']),
+	'POST /verify/[token]?/copy': pub(), // a copy of the data book checked: public by design
 	'POST /jobs/[id=id]/data-book': roles(['admin', 'engineer', 'inspector']), // streams the ZIP
 	'POST /jobs/new': roles(AUTHOR),
 	'POST /pqrs/[id=id]?/addendum': roles(AUTHOR),

@@ -18,6 +18,8 @@ const T = await import('../test-support');
 const { compileDataBook, dataBookUrl } = await import('./compile');
 const { checkFiles, MANIFEST_NAME, parseManifest, sha256Hex } = await import('./manifest');
 const { checkDataBook } = await import('./verify');
+const { checkCopy, CopyRefused } = await import('./check-copy');
+const { zipStream } = await import('./zip');
 const { dataBooksOf } = await import('./list');
 
 type People = Awaited<ReturnType<typeof P.shopWithPeople>>;
@@ -159,5 +161,38 @@ describe('the data book', () => {
 		expect(moved.changed).toEqual(['the weld log (3 then, 4 now)']);
 		expect(await checkDataBook('no-such-token-000000000000')).toBeNull();
 		expect((await dataBooksOf(a.engineer.shopId, jobId)).length).toBe(3);
+	});
+
+	it('checks a copy (the ZIP or its manifest) against the manifest the shop stored', async () => {
+		const book = await compileDataBook(a.admin, jobId);
+		const zip = await readAll(book.zip());
+		const row = (await DataBook.findByPk(book.id))!;
+		expect(await checkCopy(zip, row)).toMatchObject({
+			kind: 'zip',
+			sameManifest: true,
+			problems: []
+		});
+		expect(await checkCopy(Buffer.from(book.manifestText), row)).toMatchObject({
+			kind: 'manifest',
+			sameManifest: true,
+			problems: []
+		});
+		// The same manifest beside one report with other bytes: named, the rest pass.
+		const files = await unzip(zip);
+		const report = [...files.keys()].find((n) => n.startsWith('inspection-reports/'))!;
+		const entries = [...files]
+			.filter(([n]) => n !== MANIFEST_NAME)
+			.map(([name, bytes]) => ({ name, bytes: name === report ? Buffer.from('forged') : bytes }));
+		const forged = await readAll(zipStream(entries, book.manifestText, new Date()));
+		expect(await checkCopy(forged, row)).toMatchObject({
+			sameManifest: true,
+			problems: [`${report} is not the file the data book was compiled with.`]
+		});
+		const edited = book.manifestText.replace(book.manifest.compiledBy, 'Someone Else');
+		expect((await checkCopy(Buffer.from(edited), row)).sameManifest).toBe(false);
+		await expect(checkCopy(Buffer.from('PK\u0003\u0004 not really'), row)).rejects.toThrow(
+			CopyRefused
+		);
+		await expect(checkCopy(Buffer.from('hello'), row)).rejects.toThrow(CopyRefused);
 	});
 });

@@ -178,7 +178,7 @@ export async function compileDataBook(
 ): Promise<CompiledBook> {
 	if (!DATA_BOOK_ROLES.includes(actor.role))
 		throw new ForbiddenError('Engineers, inspectors and admins compile a job’s data book.');
-	const today = localDay(now);
+	const today = localDay(now, actor.timeZone);
 	const records = await bookRecords(actor, jobId, today);
 	const token = newBookToken();
 	const url = dataBookUrl(token);

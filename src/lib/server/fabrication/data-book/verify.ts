@@ -3,7 +3,7 @@
 // digested section by section exactly as at compile time (records.ts); any section whose digest
 // moved is named. Nothing here needs an account, so nothing here shows more than the cover does.
 import { DataBook, User } from '../../models';
-import { localDay } from '../../welders/dates';
+import { shopDay } from '../../welders/shop-day';
 import { parseManifest, sha256Hex, type ManifestFile } from './manifest';
 import { bookRecords, recordDigests, recordSections } from './records';
 
@@ -56,7 +56,9 @@ export async function checkDataBook(token: string, now = new Date()): Promise<Bo
 	if (!manifest || !intact)
 		return { ...base, matches: false, changed: ['the stored manifest itself'] };
 	const now_ = recordDigests(
-		recordSections(await bookRecords({ shopId: book.shopId }, book.jobId, localDay(now)))
+		recordSections(
+			await bookRecords({ shopId: book.shopId }, book.jobId, await shopDay(book.shopId, now))
+		)
 	);
 	const then = manifest.records;
 	const changed = Object.keys({ ...then.sections, ...now_.sections })
