@@ -1,5 +1,6 @@
 import fc from 'fast-check';
-import { Readable } from 'node:stream';
+import { PassThrough, Readable } from 'node:stream';
+import { finished } from 'node:stream/promises';
 import { describe, expect, it } from 'vitest';
 import { readAll, unzip } from '$lib/test-support/unzip';
 import {
@@ -124,6 +125,19 @@ describe('the data book manifest', () => {
 			}
 		];
 		await expect(readAll(zipStream(entries, '{}', AT))).rejects.toThrow(/b.pdf changed/);
+	});
+
+	it('lets go of an open upload when the reader goes away mid-download', async () => {
+		const upload = new PassThrough();
+		upload.write(Buffer.alloc(64 * 1024, 7)); // and never ends, as a slow store would not
+		const archive = zipStream(
+			[{ name: 'slow.pdf', sha256: '0'.repeat(64), open: async () => upload }],
+			'{}',
+			AT
+		);
+		archive.once('data', () => archive.destroy());
+		await finished(upload).catch(() => undefined);
+		expect(upload.destroyed).toBe(true);
 	});
 
 	it('names files safely and uniquely, never as the manifest', () => {

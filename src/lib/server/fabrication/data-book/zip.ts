@@ -4,7 +4,6 @@
 // handing the customer a ZIP whose manifest lies.
 import { ZipArchive } from 'archiver';
 import { createHash } from 'node:crypto';
-import { once } from 'node:events';
 import { Transform, type Readable } from 'node:stream';
 import { MANIFEST_NAME } from './manifest';
 
@@ -27,31 +26,51 @@ function checked(name: string, expected: string): Transform {
 	});
 }
 
+/** Resolves when the archive has written its current entry; rejects when it was closed first. */
+function entryWritten(archive: ZipArchive): Promise<void> {
+	return new Promise((resolve, reject) => {
+		const done = () => {
+			archive.off('close', gone);
+			resolve();
+		};
+		const gone = () => {
+			archive.off('entry', done);
+			reject(new Error('The download ended before the data book was written.'));
+		};
+		archive.once('entry', done);
+		archive.once('close', gone);
+	});
+}
+
 /** The ZIP as a stream; `date` stamps every entry (the compile time). */
 export function zipStream(entries: ZipEntry[], manifest: string, date: Date): Readable {
 	const archive = new ZipArchive({ zlib: { level: 6 } });
+	let open: Readable | null = null;
 	const add = async () => {
 		for (const e of entries) {
 			let source: Buffer | Readable;
 			if ('bytes' in e) source = Buffer.from(e.bytes.buffer, e.bytes.byteOffset, e.bytes.length);
 			else {
-				const raw = await e.open();
+				const raw = (open = await e.open());
 				const check = checked(e.name, e.sha256);
 				raw.on('error', (err) => check.destroy(err));
 				// A failed source ends the whole download (archiver would wait for it forever).
 				check.on('error', (err) => archive.destroy(err));
 				source = raw.pipe(check);
 			}
-			// One entry in flight: the next upload is opened only when this one is written.
-			const written = once(archive, 'entry');
+			// One entry in flight: the next upload is opened only when this one is written. A
+			// reader that goes away (a cancelled download) closes the archive and ends the loop.
+			const written = entryWritten(archive);
 			archive.append(source, { name: e.name, date });
 			await written;
+			open = null;
 		}
 		archive.append(manifest, { name: MANIFEST_NAME, date });
 		await archive.finalize();
 	};
-	add().catch((err: unknown) =>
-		archive.destroy(err instanceof Error ? err : new Error(String(err)))
-	);
+	add().catch((err: unknown) => {
+		open?.destroy();
+		archive.destroy(err instanceof Error ? err : new Error(String(err)));
+	});
 	return archive;
 }
