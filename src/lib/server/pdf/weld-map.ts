@@ -110,11 +110,14 @@ class Pages {
 		const qr = 150;
 		const top = this.h - M;
 		drawQr(this.page, s.url, this.w - M - qr, top - qr, qr);
-		const capY = top - qr - 11;
-		const cap = fit(VERIFY_CAPTION, f.bold, 8, qr + 60);
-		this.text(cap, this.w - M - widthOf(f.bold, cap, 8), capY, 8, f.bold, GREY);
+		// The caption under the code, right-aligned, on as many lines as it takes.
+		let capY = top - qr - 11;
+		for (const line of wrap(VERIFY_CAPTION, f.bold, 8, qr + 20)) {
+			this.text(line, this.w - M - widthOf(f.bold, line, 8), capY, 8, f.bold, GREY);
+			capY -= 10;
+		}
 		const url = fit(s.url, f.mono, 6.5, qr + 90);
-		this.text(url, this.w - M - widthOf(f.mono, url, 6.5), capY - 9, 6.5, f.mono, GREY);
+		this.text(url, this.w - M - widthOf(f.mono, url, 6.5), capY, 6.5, f.mono, GREY);
 		const tw = this.cw - qr - 16;
 		let y = top - 12;
 		this.text(fit(s.shopName, f.bold, 12, tw), M, y, 12, f.bold, GREY);
@@ -128,7 +131,7 @@ class Pages {
 			this.text(fit(value, f.bold, 11, tw - 100), M + 100, y, 11, f.bold);
 			y -= 16;
 		}
-		this.y = Math.min(y, capY - 20) - 10;
+		this.y = Math.min(y, capY - 12) - 10;
 		this.heading('In this data book');
 		for (const line of s.contents) this.paragraph(`• ${line}`, 9.5, f.regular);
 		this.y -= 8;

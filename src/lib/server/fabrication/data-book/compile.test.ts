@@ -130,7 +130,7 @@ describe('the data book', () => {
 			'D-771',
 			'Drawing revision C',
 			'Governing code AWS D1.1',
-			'W1 · tee',
+			'W1 · tee · 2F',
 			`${wps.number} rev 1 (approved) · digest`,
 			'Pass: root',
 			'(DB-07)',

@@ -132,6 +132,9 @@ function jointLines(
 	return lines;
 }
 
+/** Words joined by a space, the empty ones left out (a joint listed without size or metals). */
+const words = (...xs: string[]) => xs.filter((x) => x.trim()).join(' ');
+
 export function weldMapContent(
 	records: BookRecords,
 	welders: WeldDayWelders,
@@ -144,7 +147,9 @@ export function weldMapContent(
 ): WeldMapInput {
 	const j = records.job;
 	const joints: WeldMapJoint[] = j.joints.map((x) => ({
-		heading: `${x.mark} · ${x.jointType} ${x.size} · ${x.baseMetals} · ${x.position}`,
+		heading: [x.mark, words(x.jointType, x.size), x.baseMetals, x.position]
+			.filter(Boolean)
+			.join(' · '),
 		status: STATUS_WORDS[x.history.status],
 		lines: jointLines(x, records, welders)
 	}));
@@ -169,7 +174,7 @@ export function weldMapContent(
 		],
 		map: j.joints.map((x) => [
 			x.mark,
-			`${x.jointType} ${x.size} ${x.position}`,
+			words(x.jointType, x.size, x.position),
 			`${x.procedureNumber} rev ${x.rev}`,
 			welderList(x),
 			STATUS_WORDS[x.history.status]
