@@ -377,10 +377,11 @@ export const EN_1011_2_CET_LIMITS: Source = {
 };
 
 export const EN_1011_2_HYDROGEN_SCALES: Source = {
-	label: 'EN 1011-2 Annex C.2 hydrogen scales A to E',
-	edition: 'EN 1011-2:2001 Table C.2, as reprinted on a public preheat page (gowelding.com)',
+	label: 'EN 1011-2 Annex C.2 hydrogen scales A to E and combined thickness',
+	edition:
+		'EN 1011-2:2001 Table C.2 and C.2.4, as reprinted on a public preheat page (gowelding.com/weld/preheat/preheatinfo.htm); C.2.4 as the clause of combined thickness read in BS EN 1011-2:2001+A1:2003 (Table C.1 title, epage.pub copy)',
 	kind: 'published',
-	note: 'A > 15; B 10-15; C 5-10; D 3-5; E <= 3 ml/100 g deposited metal.'
+	note: 'A > 15; B 10-15; C 5-10; D 3-5; E <= 3 ml/100 g deposited metal. Combined thickness: the thicknesses of all paths taking heat from the weld, added (a butt weld of two equal plates twice the plate, a T fillet three times).'
 };
 
 export const AWS_D1_1_QUALIFICATION: Source = {
