@@ -173,9 +173,11 @@ export const GTAW_ROD_CHART: Source = {
 };
 
 export const SMAW_ELECTRODE_CHART: Source = {
-	label: 'SMAW electrode amperage by diameter (typical maker ranges)',
-	edition: 'recalled',
-	kind: 'from memory'
+	label: "Machinery's Handbook Table 14, current ranges for SMAW E70XX electrodes (E7018 column)",
+	edition:
+		"Machinery's Handbook, 31st edition (Industrial Press, 2020), Shielded Metal Arc Welding, Table 14, p. 1594, read in a public flipbook copy (online.flippingbook.com/view/954046886/114)",
+	kind: 'common practice',
+	note: 'E7018: 3/32 in 70-105 A, 1/8 in 110-160 A, 5/32 in 150-215 A, 3/16 in 180-275 A; the handbook puts the best starting point mid-range. Typical ranges: the electrode maker\u2019s data sheet for the box in use governs.'
 };
 
 export const THICKNESS_RULE: Source = {
