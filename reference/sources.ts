@@ -199,6 +199,14 @@ export const GAS_FLOW_PRACTICE: Source = {
 	kind: 'common practice'
 };
 
+export const GAS_FLOW_FCAW_TEXTBOOK: Source = {
+	label: 'Shielding gas flow for gas-shielded flux-cored wire (FCAW-G), carbon and low-alloy steel',
+	edition:
+		'Modern Welding (Goodheart-Willcox, 2020), Figure 8-35 and the text beside it, p. 214, read in the publisher\u2019s online textbook (g-wonlinetextbooks.com/modern-welding-2020/236)',
+	kind: 'common practice',
+	note: 'FCAW-G flows are similar to GMAW\u2019s; Figure 8-35, carbon and low-alloy steels: 1/16 in 25, 1/8 in 25, 1/4 in 30, 3/8 in 35, 3/4 in 50 ft3/h. Out of position add 10-20 ft3/h. Adjust to the nozzle and its distance from the work.'
+};
+
 export const GAS_FLOW_MEMORY: Source = {
 	label: 'Shielding gas flow for helium-rich mixes and gas-shielded FCAW',
 	edition: 'recalled',
