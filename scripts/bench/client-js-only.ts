@@ -3,9 +3,9 @@
 // scripts/bench.ts) on the demo's seeded data: for working on the bundle without the whole bench's
 // load runs. Uses BUILD_DIR / KIT_OUT_DIR like the bench; --files lists each script a page loaded.
 import { spawn, spawnSync } from 'node:child_process';
-import { existsSync, mkdtempSync, rmSync } from 'node:fs';
+import { existsSync, mkdtempSync, rmSync, symlinkSync } from 'node:fs';
 import { tmpdir } from 'node:os';
-import { join } from 'node:path';
+import { join, resolve } from 'node:path';
 import { prepareDatabase, stackEnv, startCatcher } from '../lib/local-stack';
 import { serverArgs } from '../lib/server-process';
 import { openSqlite } from '../lib/sqlite-file';
@@ -20,6 +20,10 @@ if (!flag('--no-build') || !existsSync(`${buildDir}/index.js`)) {
 	const built = spawnSync('npx', ['vite', 'build', '--logLevel', 'warn'], { stdio: 'inherit' });
 	if (built.status !== 0) process.exit(built.status ?? 1);
 }
+
+// A BUILD_DIR outside the work tree finds no node_modules beside it (DEVELOPERS.md).
+if (!existsSync(join(buildDir, 'node_modules')) && !resolve(buildDir).startsWith(process.cwd()))
+	symlinkSync(resolve('node_modules'), join(buildDir, 'node_modules'));
 
 const dataDir = mkdtempSync(join(tmpdir(), 'beadline-client-js-'));
 const port = await freePort();
