@@ -15,6 +15,12 @@ export interface Control {
 	'aria-describedby': string | undefined;
 }
 
+/** The value a control binds to (`bind:value={bound.get, bound.set}`). */
+export interface Bound<V> {
+	get(): V;
+	set(value: V): void;
+}
+
 /** The props every single-control field takes (Field, ChoiceField). */
 export interface FieldProps {
 	label: string;
