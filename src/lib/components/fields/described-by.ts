@@ -31,4 +31,6 @@ export interface FieldProps {
 	id?: string | null;
 	/** The form the field belongs to: its value and errors are read and written there by name. */
 	fields?: FormFields;
+	/** Classes of the field's own box (label, control, hint, errors), e.g. its span in a grid. */
+	cell?: string;
 }
