@@ -20,7 +20,7 @@ import { signInCookie, timeSequential, waitFor } from './bench/http';
 import { measureClientJs } from './bench/client-js';
 import { goalRows, printGoals } from './bench/goals';
 import { load, type LoadResult, type Route } from './bench/load';
-import { memoryMb, mixedRequests } from './bench/mixed';
+import { cpuMs, memoryMb, mixedRequests } from './bench/mixed';
 import { freePort } from './bench/ports';
 import { startProbe } from './bench/probe';
 import { benchPerson, prepareBench } from './bench/prepare';
@@ -209,17 +209,23 @@ const loadOpts = { seconds: SECONDS, connections: CONNECTIONS };
 const loadAtStart = loadAverage();
 process.stdout.write('  loading the bare probe … ');
 const probeApp = await startProbe();
-const firstProbe = await load(
-	probeApp.origin,
-	{ name: 'bare SvelteKit probe', path: '/' },
-	loadOpts
+/** Server CPU ms per answered request over one load run (`--only` prints it). */
+const cpuPerRequest: [name: string, ms: number][] = [];
+const measured = async (pid: number, run: () => Promise<LoadResult>) => {
+	const before = cpuMs(pid);
+	const res = await run();
+	cpuPerRequest.push([res.name, (cpuMs(pid) - before) / Math.max(1, res.requests)]);
+	return res;
+};
+const firstProbe = await measured(probeApp.server.pid!, () =>
+	load(probeApp.origin, { name: 'bare SvelteKit probe', path: '/' }, loadOpts)
 );
 if (!ONLY) await probeApp.stop();
 console.log(`${firstProbe.reqPerSec} req/s`);
 const results: LoadResult[] = [];
 for (const r of routes) {
 	process.stdout.write(`  loading ${r.name} … `);
-	results.push(await load(origin, r, loadOpts));
+	results.push(await measured(server.pid!, () => load(origin, r, loadOpts)));
 	console.log(`${results.at(-1)!.reqPerSec} req/s`);
 }
 // A quick run on a shared machine: the probe again after the routes, and shares of the mean of
@@ -227,7 +233,9 @@ for (const r of routes) {
 let probe = firstProbe;
 if (ONLY) {
 	process.stdout.write('  loading the bare probe again … ');
-	const again = await load(probeApp.origin, { name: 'bare SvelteKit probe', path: '/' }, loadOpts);
+	const again = await measured(probeApp.server.pid!, () =>
+		load(probeApp.origin, { name: 'bare SvelteKit probe', path: '/' }, loadOpts)
+	);
 	await probeApp.stop();
 	console.log(`${again.reqPerSec} req/s`);
 	probe = { ...firstProbe, reqPerSec: Math.round((firstProbe.reqPerSec + again.reqPerSec) / 2) };
@@ -325,5 +333,16 @@ const figures: BenchFigures = {
 };
 printFigures(figures);
 printGoals(figures.goals);
+if (ONLY) {
+	// The same shares by CPU: what each route would get of the probe's rate if CPU were all.
+	const probeCpu =
+		cpuPerRequest.filter(([n]) => n === 'bare SvelteKit probe').reduce((a, [, ms]) => a + ms, 0) /
+		2;
+	console.log('\nServer CPU per request (user + system, ms) and the probe’s CPU as a share of it');
+	for (const [name, ms] of cpuPerRequest)
+		console.log(
+			`${name.padEnd(40)} ${ms.toFixed(3).padStart(8)} ms   ${((probeCpu / ms) * 100).toFixed(1).padStart(6)} %`
+		);
+}
 console.log(`\nFigures written to ${writeFigures(figures)}`);
 process.exit(0);
