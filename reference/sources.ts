@@ -173,9 +173,11 @@ export const GTAW_ROD_CHART: Source = {
 };
 
 export const SMAW_ELECTRODE_CHART: Source = {
-	label: 'SMAW electrode amperage by diameter (typical maker ranges)',
-	edition: 'recalled',
-	kind: 'from memory'
+	label: "Machinery's Handbook Table 14, current ranges for SMAW E70XX electrodes (E7018 column)",
+	edition:
+		"Machinery's Handbook, 31st edition (Industrial Press, 2020), Shielded Metal Arc Welding, Table 14, p. 1594, read in a public flipbook copy (online.flippingbook.com/view/954046886/114)",
+	kind: 'common practice',
+	note: 'E7018: 3/32 in 70-105 A, 1/8 in 110-160 A, 5/32 in 150-215 A, 3/16 in 180-275 A; the handbook puts the best starting point mid-range. Typical ranges: the electrode maker\u2019s data sheet for the box in use governs.'
 };
 
 export const THICKNESS_RULE: Source = {
@@ -195,6 +197,14 @@ export const GAS_FLOW_PRACTICE: Source = {
 	label: 'Shielding gas flow ranges (shop practice and a welding textbook table)',
 	edition: 'values as collected in the project brief',
 	kind: 'common practice'
+};
+
+export const GAS_FLOW_FCAW_TEXTBOOK: Source = {
+	label: 'Shielding gas flow for gas-shielded flux-cored wire (FCAW-G), carbon and low-alloy steel',
+	edition:
+		'Modern Welding (Goodheart-Willcox, 2020), Figure 8-35 and the text beside it, p. 214, read in the publisher\u2019s online textbook (g-wonlinetextbooks.com/modern-welding-2020/236)',
+	kind: 'common practice',
+	note: 'FCAW-G flows are similar to GMAW\u2019s; Figure 8-35, carbon and low-alloy steels: 1/16 in 25, 1/8 in 25, 1/4 in 30, 3/8 in 35, 3/4 in 50 ft3/h. Out of position add 10-20 ft3/h. Adjust to the nozzle and its distance from the work.'
 };
 
 export const GAS_FLOW_MEMORY: Source = {
@@ -377,10 +387,11 @@ export const EN_1011_2_CET_LIMITS: Source = {
 };
 
 export const EN_1011_2_HYDROGEN_SCALES: Source = {
-	label: 'EN 1011-2 Annex C.2 hydrogen scales A to E',
-	edition: 'EN 1011-2:2001 Table C.2, as reprinted on a public preheat page (gowelding.com)',
+	label: 'EN 1011-2 Annex C.2 hydrogen scales A to E and combined thickness',
+	edition:
+		'EN 1011-2:2001 Table C.2 and C.2.4, as reprinted on a public preheat page (gowelding.com/weld/preheat/preheatinfo.htm); C.2.4 as the clause of combined thickness read in BS EN 1011-2:2001+A1:2003 (Table C.1 title, epage.pub copy)',
 	kind: 'published',
-	note: 'A > 15; B 10-15; C 5-10; D 3-5; E <= 3 ml/100 g deposited metal.'
+	note: 'A > 15; B 10-15; C 5-10; D 3-5; E <= 3 ml/100 g deposited metal. Combined thickness: the thicknesses of all paths taking heat from the weld, added (a butt weld of two equal plates twice the plate, a T fillet three times).'
 };
 
 export const AWS_D1_1_QUALIFICATION: Source = {

@@ -99,7 +99,8 @@ export const ACTION_WORDS: Readonly<Record<string, ActionWords>> = {
 	'weld.logged': a('Weld logged', 'logged passes welded on the joint'),
 	'weld.override_signed': a('Override signed', 'signed an override for a refused weld log'),
 	'joint.inspected': a('Joint inspected', 'inspected the joint and signed the result'),
-	'joint.repair_opened': a('Repair opened', 'opened a repair of the rejected joint')
+	'joint.repair_opened': a('Repair opened', 'opened a repair of the rejected joint'),
+	'data-book.compiled': a('Data book compiled', 'compiled the job’s data book for the customer')
 };
 
 /** The words for a code; one no table knows reads from its own words ("pqr.reopened" → …). */

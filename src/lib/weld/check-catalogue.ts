@@ -91,8 +91,8 @@ export const CHECK_CATALOGUE: readonly CatalogueEntry[] = [
 		'gas-flow',
 		'settings',
 		'Shielding gas flow',
-		'Flow against the usual range for the process and gas (GTAW argon 11–35 CFH, GMAW 25–35 CFH).',
-		[S.GAS_FLOW_PRACTICE, S.GAS_FLOW_MEMORY]
+		'Flow against the usual range for the process and gas (GTAW argon 11–35 CFH, GMAW 25–35 CFH, gas-shielded FCAW 25–50 CFH).',
+		[S.GAS_FLOW_PRACTICE, S.GAS_FLOW_FCAW_TEXTBOOK, S.GAS_FLOW_MEMORY]
 	),
 	e(
 		'filler-classification',

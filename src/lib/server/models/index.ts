@@ -75,3 +75,5 @@ export * from './welders';
 export { ContinuityTap } from './continuity-tap';
 
 export { Job, JobJoint, JointInspection, JointRepair, WeldLog, WeldOverride } from './jobs';
+
+export { DataBook } from './data-book';
