@@ -16,16 +16,16 @@ import { roundOf } from './joint-history';
 import { revisionFor } from './joints';
 import { currentRound } from './rounds';
 import { checkSignature, sign } from './signing';
-import { findJoint } from './weld-log';
+import { findJoint, type OnJob } from './weld-log';
 
 export async function recordInspection(
 	actor: SessionUser,
-	input: InspectionForm,
+	input: InspectionForm & OnJob,
 	event: RequestEvent | null = null
 ): Promise<{ id: number; digest: string }> {
 	if (!INSPECT_ROLES.includes(actor.role))
 		throw new ForbiddenError('Only an inspector records an inspection.');
-	const { joint, job } = await findJoint(actor.shopId, input.jointId);
+	const { joint, job } = await findJoint(actor.shopId, input.jointId, input.jobId);
 	await checkSignature(
 		actor,
 		input.password,
@@ -88,12 +88,12 @@ export async function recordInspection(
 
 export async function recordRepair(
 	actor: SessionUser,
-	input: RepairForm,
+	input: RepairForm & OnJob,
 	event: RequestEvent | null = null
 ): Promise<{ id: number; round: number }> {
 	if (!REPAIR_ROLES.includes(actor.role))
 		throw new ForbiddenError('Engineers, admins and inspectors record repairs.');
-	const { joint, job } = await findJoint(actor.shopId, input.jointId);
+	const { joint, job } = await findJoint(actor.shopId, input.jointId, input.jobId);
 	return write(async (t) => {
 		const me = await actingMember(actor, REPAIR_ROLES, t);
 		// The joint's row is locked, so two repairs of one rejection cannot both open a round.

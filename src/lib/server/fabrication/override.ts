@@ -13,16 +13,16 @@ import { localDay } from '../welders/dates';
 import { INSPECT_ROLES } from './access';
 import { checkSignature, sign } from './signing';
 import { checkWeld } from './weld-check';
-import { findJoint } from './weld-log';
+import { findJoint, type OnJob } from './weld-log';
 
 export async function recordOverride(
 	actor: SessionUser,
-	input: OverrideForm,
+	input: OverrideForm & OnJob,
 	event: RequestEvent | null = null
 ): Promise<{ id: number; digest: string }> {
 	if (!INSPECT_ROLES.includes(actor.role))
 		throw new ForbiddenError('Only an inspector can override a refused weld log.');
-	const { joint, job } = await findJoint(actor.shopId, input.jointId);
+	const { joint, job } = await findJoint(actor.shopId, input.jointId, input.jobId);
 	const welder = await Welder.findOne({ where: { id: input.welderId, shopId: actor.shopId } });
 	if (!welder) throw new NotFoundError('No such welder in your shop.');
 	const check = await checkWeld(actor.shopId, joint, welder, localDay());

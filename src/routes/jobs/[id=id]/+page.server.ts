@@ -123,7 +123,7 @@ export const actions: Actions = {
 				log: { jointId, ok: false, text: parsed.error.issues[0]?.message ?? 'Tick a pass.' }
 			});
 		try {
-			const r = await logWeld(user, parsed.data, event);
+			const r = await logWeld(user, { ...parsed.data, jobId: Number(event.params.id) }, event);
 			const text = `Logged ${r.logged.join(', ')}${r.already.length ? `; ${r.already.join(', ')} already logged` : ''}.`;
 			return { log: { jointId, ok: true, text } };
 		} catch (e) {
@@ -140,7 +140,7 @@ export const actions: Actions = {
 		form.data.password = ''; // the password is never sent back
 		if (!form.valid) return fail(400, { form });
 		try {
-			await recordOverride(user, input, event);
+			await recordOverride(user, { ...input, jobId: Number(event.params.id) }, event);
 		} catch (e) {
 			return refuseForm(form, e);
 		}
@@ -155,7 +155,7 @@ export const actions: Actions = {
 		form.data.password = ''; // the password is never sent back
 		if (!form.valid) return fail(400, { form });
 		try {
-			await recordInspection(user, input, event);
+			await recordInspection(user, { ...input, jobId: Number(event.params.id) }, event);
 		} catch (e) {
 			return refuseForm(form, e);
 		}
@@ -169,7 +169,11 @@ export const actions: Actions = {
 		if (!form.valid) return fail(400, { form });
 		let round: number;
 		try {
-			({ round } = await recordRepair(user, form.data, event));
+			({ round } = await recordRepair(
+				user,
+				{ ...form.data, jobId: Number(event.params.id) },
+				event
+			));
 		} catch (e) {
 			return refuseForm(form, e);
 		}
