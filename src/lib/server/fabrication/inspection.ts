@@ -15,7 +15,7 @@ import { INSPECT_ROLES, REPAIR_ROLES } from './access';
 import { roundOf } from './joint-history';
 import { revisionFor } from './joints';
 import { currentRound } from './rounds';
-import { checkSignature, sign } from './signing';
+import { checkSignature, inspectorsJoint, sign } from './signing';
 import { findJoint, type OnJob } from './weld-log';
 
 export async function recordInspection(
@@ -23,15 +23,12 @@ export async function recordInspection(
 	input: InspectionForm & OnJob,
 	event: RequestEvent | null = null
 ): Promise<{ id: number; digest: string }> {
-	if (!INSPECT_ROLES.includes(actor.role))
-		throw new ForbiddenError('Only an inspector records an inspection.');
-	const { joint, job } = await findJoint(actor.shopId, input.jointId, input.jobId);
-	await checkSignature(
+	const { joint, job } = await inspectorsJoint(
 		actor,
-		input.password,
-		{ objectType: 'job_joint', objectId: joint.id },
-		event
+		input,
+		'Only an inspector records an inspection.'
 	);
+	await checkSignature(actor, input.password, joint.id, event);
 	return write(async (t) => {
 		const me = await actingMember(actor, INSPECT_ROLES, t);
 		const round = await currentRound(joint.id, t);

@@ -45,6 +45,7 @@ export const load: PageServerLoad = async (event) => {
 	return {
 		job,
 		canEdit,
+		signer: { name: user.name, role: user.role },
 		canLog: WELD_ROLES.includes(user.role),
 		canInspect: INSPECT_ROLES.includes(user.role),
 		canRepair: REPAIR_ROLES.includes(user.role),
