@@ -99,7 +99,17 @@ export const ACTION_WORDS: Readonly<Record<string, ActionWords>> = {
 	'weld.logged': a('Weld logged', 'logged passes welded on the joint'),
 	'weld.override_signed': a('Override signed', 'signed an override for a refused weld log'),
 	'joint.inspected': a('Joint inspected', 'inspected the joint and signed the result'),
-	'joint.repair_opened': a('Repair opened', 'opened a repair of the rejected joint')
+	'joint.repair_opened': a('Repair opened', 'opened a repair of the rejected joint'),
+	'joint.report_downloaded': a('Inspection report downloaded', 'downloaded an inspection report'),
+	'joint.report_tamper_detected': a(
+		'Inspection report altered',
+		'asked for an inspection report whose stored bytes no longer match their digest'
+	),
+	'job.drawing_attached': a('Drawing attached', 'attached the drawing to the job'),
+	'joint.marker_placed': a(
+		'Joint marked on the drawing',
+		'marked where the joint is on the drawing'
+	)
 };
 
 /** The words for a code; one no table knows reads from its own words ("pqr.reopened" → …). */

@@ -16,11 +16,13 @@ import { roundOf } from './joint-history';
 import { revisionFor } from './joints';
 import { currentRound } from './rounds';
 import { checkSignature, inspectorsJoint, sign } from './signing';
+import { discardUploads } from '../storage';
+import { storeJobFile, type PostedFile } from './files';
 import { findJoint, type OnJob } from './weld-log';
 
 export async function recordInspection(
 	actor: SessionUser,
-	input: InspectionForm & OnJob,
+	input: InspectionForm & OnJob & { report?: PostedFile | null },
 	event: RequestEvent | null = null
 ): Promise<{ id: number; digest: string }> {
 	const { joint, job } = await inspectorsJoint(
@@ -29,6 +31,8 @@ export async function recordInspection(
 		'Only an inspector records an inspection.'
 	);
 	await checkSignature(actor, input.password, joint.id, event);
+	// The report is stored before the write and named in what is signed; a refused write drops it.
+	const report = input.report ? await storeJobFile(input.report, 'report', 'nde-report') : null;
 	return write(async (t) => {
 		const me = await actingMember(actor, INSPECT_ROLES, t);
 		const round = await currentRound(joint.id, t);
@@ -49,7 +53,8 @@ export async function recordInspection(
 			method: input.method,
 			extent: input.extent,
 			result: input.result,
-			note: input.note || null
+			note: input.note || null,
+			report: report && { name: report.name, sha256: report.sha256 }
 		};
 		const signed = sign(me, content);
 		const i = await JointInspection.create(
@@ -60,9 +65,9 @@ export async function recordInspection(
 				extent: input.extent,
 				result: input.result,
 				note: input.note || null,
-				reportKey: null,
-				reportName: null,
-				reportSha256: null,
+				reportKey: report?.key ?? null,
+				reportName: report?.name ?? null,
+				reportSha256: report?.sha256 ?? null,
 				...signed
 			},
 			{ transaction: t }
@@ -80,6 +85,9 @@ export async function recordInspection(
 			t
 		);
 		return { id: i.id, digest: signed.digest };
+	}).catch(async (e: unknown) => {
+		if (report) await discardUploads([report.key]);
+		throw e;
 	});
 }
 
