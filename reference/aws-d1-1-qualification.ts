@@ -1,5 +1,6 @@
-// AWS D1.1 WPS qualification ranges (2015 Tables 4.1 and 4.2), recalled: see the source.
-import { AWS_D1_1_QUALIFICATION } from './sources';
+// AWS D1.1 WPS qualification ranges (2015 Tables 4.1 and 4.2, recalled; the pipe diameter rule
+// read in Table 9.10): see the sources.
+import { AWS_D1_1_QUALIFICATION, AWS_D1_1_TABLE_9_10 } from './sources';
 import type { Source } from './types';
 
 const S: Source = AWS_D1_1_QUALIFICATION;
@@ -40,7 +41,7 @@ export const D1_1_THICKNESS: readonly {
 ];
 
 /** Pipe: job-size test under 24 in qualifies its diameter and over; 24 in and over, 24 in and over. */
-export const D1_1_DIAMETER = { jobSizeBreakIn: 24, source: S } as const;
+export const D1_1_DIAMETER = { jobSizeBreakIn: 24, source: AWS_D1_1_TABLE_9_10 } as const;
 
 /** WPS test position -> production positions qualified (groove). */
 export const D1_1_WPS_POSITIONS: Readonly<Record<string, readonly ('F' | 'H' | 'V' | 'OH')[]>> = {

@@ -1,4 +1,4 @@
-import { ASME_IX_QW_422, ASME_IX_QW_422_MEMORY } from './sources';
+import { ASME_IX_QW_422, ASME_IX_QW_422_2013_AL, ASME_IX_QW_422_MEMORY } from './sources';
 import type { MetalFamily, Source } from './types';
 
 export interface BaseMetalRow {
@@ -16,6 +16,7 @@ export interface BaseMetalRow {
 
 const P = ASME_IX_QW_422;
 const M = ASME_IX_QW_422_MEMORY;
+const AL = ASME_IX_QW_422_2013_AL;
 
 const cs = (
 	key: string,
@@ -64,23 +65,25 @@ export const BASE_METALS: readonly BaseMetalRow[] = [
 		minTensileKsi: t.endsWith('L') ? 70 : 75,
 		source: M
 	})),
+	// Aluminium: 1100, 3003, 5083, 6061, 6063 read in the 2013 table's B361 fittings rows; 5052
+	// and 5086 recalled.
 	...(
 		[
-			['1100', '21'],
-			['3003', '21'],
-			['5052', '22'],
-			['5083', '25'],
-			['5086', '25'],
-			['6061', '23'],
-			['6063', '23']
+			['1100', '21', AL],
+			['3003', '21', AL],
+			['5052', '22', M],
+			['5083', '25', AL],
+			['5086', '25', M],
+			['6061', '23', AL],
+			['6063', '23', AL]
 		] as const
-	).map(([alloy, p]): BaseMetalRow => ({
+	).map(([alloy, p, source]): BaseMetalRow => ({
 		key: alloy,
 		name: `Aluminium alloy ${alloy}`,
 		family: 'aluminium',
 		pNumber: p,
 		group: null,
 		minTensileKsi: null,
-		source: M
+		source
 	}))
 ];

@@ -4,6 +4,7 @@ import {
 	ASME_IX_QW_442,
 	ASME_IX_QW_442_MEMORY,
 	AWS_A5_CLASSIFICATION,
+	AWS_D1_2_FILLER_GROUPS,
 	ISO_15614_1_TABLE_A1,
 	ISO_15614_1_TABLE_A2
 } from './sources';
@@ -117,8 +118,10 @@ export const FILLERS: readonly FillerRow[] = [
 		suits: ['aluminium'],
 		meaning: `Aluminium alloy ${alloy} bare electrode or rod`,
 		source: S,
-		fNumberSource: FM,
-		aNumberSource: AM
+		// F21 1100; F22 5183, 5356, 5554, 5556; F23 4043, 4047 (D1.2:2014 Clause 3 groups).
+		fNumberSource: AWS_D1_2_FILLER_GROUPS,
+		// No A-Number: the twelve QW-442 ranges (Table A.2) are all ferrous weld metal.
+		aNumberSource: A2
 	}))
 ];
 

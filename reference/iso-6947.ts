@@ -1,5 +1,5 @@
 // ISO 6947 welding positions and the usual ASME / AWS test position each corresponds to.
-import { ISO_6947 } from './sources';
+import { ISO_6947, ISO_6947_RECALLED } from './sources';
 import type { Source } from './types';
 
 export const ISO_POSITIONS = [
@@ -31,7 +31,7 @@ export const ISO_POSITION_NAMES: Readonly<Record<IsoPosition, string>> = {
 	'J-L045': 'pipe inclined 45 degrees, welding down'
 };
 
-/** ASME / AWS test position -> ISO 6947 position (the common correspondence). */
+/** ASME / AWS test position -> ISO 6947 position (ISO 6947:2011 Annex B, Table B.1). */
 export const ASME_TO_ISO: Readonly<Record<string, readonly IsoPosition[]>> = {
 	'1G': ['PA'],
 	'2G': ['PC'],
@@ -49,3 +49,9 @@ export const ASME_TO_ISO: Readonly<Record<string, readonly IsoPosition[]>> = {
 };
 
 export const ISO_6947_SOURCE: Source = ISO_6947;
+
+/** Rows of ASME_TO_ISO whose equivalent was recalled, not read; every other row is ISO_6947. */
+const RECALLED = new Set(['2FR', '5F']);
+/** The source of one ASME_TO_ISO row. */
+export const asmeToIsoSource = (asme: string): Source =>
+	RECALLED.has(asme) ? ISO_6947_RECALLED : ISO_6947;

@@ -2,7 +2,13 @@
 // A row says "this AWS wire is normally also designated so"; it is not an equivalence the codes
 // grant: ISO 15614-1 8.4.4 and ASME IX QW-404 each judge the filler by their own rules, and a
 // wire carries a designation only where its maker certified it. Source beside each row.
-import { AWS_A5_9_2017, ISO_14341_GUIDE, ISO_14343_GUIDE, ISO_FILLER_MEMORY } from './sources';
+import {
+	ALUMINIUM_FILLER_SHEETS,
+	AWS_A5_9_2017,
+	ISO_14341_GUIDE,
+	ISO_14343_GUIDE,
+	ISO_FILLER_MEMORY
+} from './sources';
 import type { Source } from './types';
 
 export interface IsoFillerRow {
@@ -100,17 +106,17 @@ export const ISO_FILLER_ROWS: readonly IsoFillerRow[] = [
 	{
 		aws: 'ER4043',
 		standard: 'ISO 18273',
-		designation: 'ISO 18273 S Al 4043A (AlSi5(A))',
+		designation: 'ISO 18273 AlSi5',
 		use: 'both',
-		source: M,
-		note: 'Recalled; the ISO alloy limits differ slightly from A5.10\u2019s.'
+		source: ALUMINIUM_FILLER_SHEETS,
+		note: 'The chemical symbol a maker\u2019s 4043 sheet gives beside AWS A5.10 ER4043 (not AlSi5(A), the 4043A alloy, which Beadline had recalled); the ISO alloy limits differ slightly from A5.10\u2019s.'
 	},
 	{
 		aws: 'ER5356',
 		standard: 'ISO 18273',
-		designation: 'ISO 18273 S Al 5356 (AlMg5Cr(A))',
+		designation: 'ISO 18273 AlMg5Cr(A)',
 		use: 'both',
-		source: M,
-		note: 'Recalled.'
+		source: ALUMINIUM_FILLER_SHEETS,
+		note: 'The chemical symbol a maker\u2019s 5356 sheet gives beside AWS A5.10 ER5356.'
 	}
 ];

@@ -1,4 +1,9 @@
-import { GAS_FLOW_MEMORY, GAS_FLOW_PRACTICE, GAS_MIX_PRACTICE } from './sources';
+import {
+	GAS_FLOW_FCAW_TEXTBOOK,
+	GAS_FLOW_MEMORY,
+	GAS_FLOW_PRACTICE,
+	GAS_MIX_PRACTICE
+} from './sources';
 import type { Band, Process, Source } from './types';
 
 export interface GasMix {
@@ -146,9 +151,9 @@ export const GAS_FLOW: readonly FlowRow[] = [
 	},
 	{
 		use: 'FCAW',
-		cfh: { min: 35, max: 50 },
-		note: 'gas-shielded flux-cored wire',
-		source: GAS_FLOW_MEMORY
+		cfh: { min: 25, max: 50 },
+		note: 'gas-shielded flux-cored wire, 1/16 to 3/4 in carbon steel; out of position often needs more',
+		source: GAS_FLOW_FCAW_TEXTBOOK
 	}
 ];
 

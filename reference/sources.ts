@@ -74,6 +74,14 @@ export const ASME_IX_QW_422_MEMORY: Source = {
 	kind: 'from memory'
 };
 
+export const ASME_IX_QW_422_2013_AL: Source = {
+	label: 'ASME BPVC Section IX QW/QB-422 (P-Numbers), aluminium fittings rows',
+	edition:
+		'BPVC IX 2013, the B361 fittings rows read from a public copy of the table (anyflip.com/pegaz/aval/basic/251-300)',
+	kind: 'published',
+	note: 'WP1100 P-21, WP3003 P-21, 5083 P-25, 5154 P-22, WP6061 P-23, WP6063 P-23 (fittings). Rows for the same alloys under other product specifications (B209 sheet and plate, B221 extrusions) were not read.'
+};
+
 export const ASME_IX_QW_432: Source = {
 	label: 'ASME BPVC Section IX QW-432 (F-Numbers)',
 	edition: 'BPVC IX 2010s editions (specification-to-F-Number grouping read from a public chart)',
@@ -84,6 +92,14 @@ export const ASME_IX_QW_432_MEMORY: Source = {
 	label: 'ASME BPVC Section IX QW-432 (F-Numbers)',
 	edition: 'recalled, no copy at hand',
 	kind: 'from memory'
+};
+
+export const AWS_D1_2_FILLER_GROUPS: Source = {
+	label: 'AWS D1.2/D1.2M:2014 Clause 3 filler metal groups F21 to F25 (aluminium)',
+	edition:
+		'D1.2/D1.2M:2014, the filler metal group table of Clause 3 read from a public copy of the page (scribd.com/document/528227606)',
+	kind: 'published',
+	note: 'F21: ER1100, ER1188; F22: ER5183, ER5356, ER5554, ER5556, ER5654; F23: ER4010, ER4043, ER4047, ER4145, ER4643; F24: ER4009 and cast rods; F25: ER2319. These are the group numbers of the ASME IX QW-432 aluminium F-Numbers; the QW-432 alloy rows themselves were not read, so for ASME work QW-432 governs where the two differ.'
 };
 
 export const ASME_IX_QW_442: Source = {
@@ -157,9 +173,11 @@ export const GTAW_ROD_CHART: Source = {
 };
 
 export const SMAW_ELECTRODE_CHART: Source = {
-	label: 'SMAW electrode amperage by diameter (typical maker ranges)',
-	edition: 'recalled',
-	kind: 'from memory'
+	label: "Machinery's Handbook Table 14, current ranges for SMAW E70XX electrodes (E7018 column)",
+	edition:
+		"Machinery's Handbook, 31st edition (Industrial Press, 2020), Shielded Metal Arc Welding, Table 14, p. 1594, read in a public flipbook copy (online.flippingbook.com/view/954046886/114)",
+	kind: 'common practice',
+	note: 'E7018: 3/32 in 70-105 A, 1/8 in 110-160 A, 5/32 in 150-215 A, 3/16 in 180-275 A; the handbook puts the best starting point mid-range. Typical ranges: the electrode maker\u2019s data sheet for the box in use governs.'
 };
 
 export const THICKNESS_RULE: Source = {
@@ -179,6 +197,14 @@ export const GAS_FLOW_PRACTICE: Source = {
 	label: 'Shielding gas flow ranges (shop practice and a welding textbook table)',
 	edition: 'values as collected in the project brief',
 	kind: 'common practice'
+};
+
+export const GAS_FLOW_FCAW_TEXTBOOK: Source = {
+	label: 'Shielding gas flow for gas-shielded flux-cored wire (FCAW-G), carbon and low-alloy steel',
+	edition:
+		'Modern Welding (Goodheart-Willcox, 2020), Figure 8-35 and the text beside it, p. 214, read in the publisher\u2019s online textbook (g-wonlinetextbooks.com/modern-welding-2020/236)',
+	kind: 'common practice',
+	note: 'FCAW-G flows are similar to GMAW\u2019s; Figure 8-35, carbon and low-alloy steels: 1/16 in 25, 1/8 in 25, 1/4 in 30, 3/8 in 35, 3/4 in 50 ft3/h. Out of position add 10-20 ft3/h. Adjust to the nozzle and its distance from the work.'
 };
 
 export const GAS_FLOW_MEMORY: Source = {
@@ -293,7 +319,8 @@ export const ISO_15614_1_LEVELS: Source = {
 export const ISO_TR_15608: Source = {
 	label: 'ISO/TR 15608 material grouping system (steels)',
 	edition: 'ISO/TR 15608:2017, group names recalled',
-	kind: 'from memory'
+	kind: 'from memory',
+	note: 'Groups 1 to 6 and sub-groups 1.1 to 1.4 read the same in the CR ISO 15608:2000 text (public copy); the 2017 names of groups 7 to 11 were not read, and a public summary of the grouping gives group 8 as Ni 31 % at most, not the 35 % recalled for 2017.'
 };
 
 export const ISO_9606_1_RANGES: Source = {
@@ -327,11 +354,21 @@ export const ISO_9606_1_VALIDITY: Source = {
 };
 
 export const ISO_6947: Source = {
-	label: 'ISO 6947 welding positions (PA to PH, PJ, H-L045, J-L045)',
+	label:
+		'ISO 6947 welding positions (PA to PH, PJ, H-L045, J-L045) and their ASME/AWS test positions',
 	edition:
-		'ISO 6947:2011/2019. PA-PG (main positions) read from a public reprint of the ISO 6947 text and a welding course page (corso-saldatura.it); PH, PJ, H-L045 and J-L045 with their directions (up, down) as ISO 9606-1:2012 5.8 and Tables 9, 10 use them. ASME/AWS equivalents: 1G/1F PA, 2F PB, 2G PC, 4F PD, 4G PE read in a public position chart that cites BS EN ISO 15614-1, ASME IX and AWS D1.1; 3G, 3F, 5G, 5F, 6G recalled',
+		'ISO 6947:2011 Annex B (informative), Table B.1, read in GOST R ISO 6947-2017, a national adoption identical to ISO 6947:2011 (docs.cntd.ru/document/1200144942): 1G PA, 2G PC, 3G uphill PF, 3G downhill PG, 4G PE, 5G uphill PH, 5G downhill PJ, 6G uphill H-L045, 6G downhill J-L045, 1F PA, 1FR PA, 2F PB. 3F PF/PG read in a public course presentation on welding positions (2005), 4F PD in a public position chart citing BS EN ISO 15614-1, ASME IX and AWS D1.1; 6GR welded up, H-L045, read in an AWS underwater welding specification\u2019s test position figure (D3.6M Figure 5.4, public reprint)',
+	kind: 'published',
+	note: 'Annex B compares the designations; a qualification is still judged by the code it is made to.'
+};
+
+/** The two ASME/AWS rows of the ISO 6947 table whose equivalent was not read (2FR, 5F). */
+export const ISO_6947_RECALLED: Source = {
+	label: 'ISO 6947 equivalents of 2FR and 5F',
+	edition:
+		'recalled: 2FR (pipe rotated, horizontal fillet) as PB, 5F (pipe fixed, fillet) as PH up / PJ down; the rows of Table B.1 after 2F were not read',
 	kind: 'from memory',
-	note: 'Kept as from memory because the table mixes read and recalled rows; ISO 6947 Annex B (comparison of designations) was not read.'
+	note: 'Verify in ISO 6947:2011 Annex B before relying on it.'
 };
 
 export const EN_1011_2_CET: Source = {
@@ -350,10 +387,11 @@ export const EN_1011_2_CET_LIMITS: Source = {
 };
 
 export const EN_1011_2_HYDROGEN_SCALES: Source = {
-	label: 'EN 1011-2 Annex C.2 hydrogen scales A to E',
-	edition: 'EN 1011-2:2001 Table C.2, as reprinted on a public preheat page (gowelding.com)',
+	label: 'EN 1011-2 Annex C.2 hydrogen scales A to E and combined thickness',
+	edition:
+		'EN 1011-2:2001 Table C.2 and C.2.4, as reprinted on a public preheat page (gowelding.com/weld/preheat/preheatinfo.htm); C.2.4 as the clause of combined thickness read in BS EN 1011-2:2001+A1:2003 (Table C.1 title, epage.pub copy)',
 	kind: 'published',
-	note: 'A > 15; B 10-15; C 5-10; D 3-5; E <= 3 ml/100 g deposited metal.'
+	note: 'A > 15; B 10-15; C 5-10; D 3-5; E <= 3 ml/100 g deposited metal. Combined thickness: the thicknesses of all paths taking heat from the weld, added (a butt weld of two equal plates twice the plate, a T fillet three times).'
 };
 
 export const AWS_D1_1_QUALIFICATION: Source = {
@@ -361,6 +399,14 @@ export const AWS_D1_1_QUALIFICATION: Source = {
 	edition: 'D1.1/D1.1M:2015, rows recalled',
 	kind: 'from memory',
 	note: 'Verify in the edition the contract names.'
+};
+
+export const AWS_D1_1_TABLE_9_10: Source = {
+	label: 'AWS D1.1/D1.1M:2015 Table 9.10 (WPS qualification, CJP groove welds on pipe or tubing)',
+	edition:
+		'D1.1/D1.1M:2015, Table 9.10 read from a public copy of the two pages (ro.scribd.com/document/435989338)',
+	kind: 'published',
+	note: 'Job-size test pipes: a test under 24 in qualifies the test diameter and over; 24 in and over qualifies 24 in and over. Standard test pipes (2 in Sch 80 or 3 in Sch 40; 6 in Sch 120 or 8 in Sch 80) have their own rows.'
 };
 
 export const AWS_D1_1_GMAW_S: Source = {
@@ -400,6 +446,15 @@ export const ISO_14341_GUIDE: Source = {
 	edition: 'ISO 14341 as summarised in a public guide (studylib.net)',
 	kind: 'published',
 	note: 'G3Si1: Mn 1.30-1.60, Si 0.70-1.00 %; G4Si1: Mn 1.60-1.90, Si 0.80-1.20 %.'
+};
+
+export const ALUMINIUM_FILLER_SHEETS: Source = {
+	label:
+		'Filler maker\u2019s product data sheets: aluminium 4043 and 5356 wire and rod, ISO designation',
+	edition:
+		'published product sheets of one US aluminium filler maker, read in issue 15 (titles and addresses in reference/README.md)',
+	kind: 'common practice',
+	note: 'The 4043 sheet gives the ISO designation AlSi5, the 5356 sheet AlMg5Cr(A); both state AWS A5.10. One maker\u2019s certification of its own wire: read the certificate of the wire in use.'
 };
 
 export const ISO_FILLER_MEMORY: Source = {

@@ -70,12 +70,12 @@ export const GTAW_ROD_AMPS: readonly RodAmpRow[] = [
 	{ diameterIn: 1 / 8, amps: { min: 100, max: 165 }, source: GTAW_ROD_CHART }
 ];
 
-/** E7018-type low-hydrogen electrodes, flat position. */
+/** E7018-type low-hydrogen electrodes: the E7018 column of Machinery's Handbook Table 14. */
 export const SMAW_ELECTRODE_AMPS: readonly RodAmpRow[] = [
-	{ diameterIn: 3 / 32, amps: { min: 70, max: 110 }, source: SMAW_ELECTRODE_CHART },
-	{ diameterIn: 1 / 8, amps: { min: 90, max: 165 }, source: SMAW_ELECTRODE_CHART },
-	{ diameterIn: 5 / 32, amps: { min: 125, max: 220 }, source: SMAW_ELECTRODE_CHART },
-	{ diameterIn: 3 / 16, amps: { min: 170, max: 300 }, source: SMAW_ELECTRODE_CHART }
+	{ diameterIn: 3 / 32, amps: { min: 70, max: 105 }, source: SMAW_ELECTRODE_CHART },
+	{ diameterIn: 1 / 8, amps: { min: 110, max: 160 }, source: SMAW_ELECTRODE_CHART },
+	{ diameterIn: 5 / 32, amps: { min: 150, max: 215 }, source: SMAW_ELECTRODE_CHART },
+	{ diameterIn: 3 / 16, amps: { min: 180, max: 275 }, source: SMAW_ELECTRODE_CHART }
 ];
 
 /** GTAW amps per inch of thickness, by base metal family, and the band around it. */

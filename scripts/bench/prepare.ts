@@ -39,7 +39,8 @@ export async function prepareBench(): Promise<BenchFixture> {
 			name: u.name,
 			email: u.email,
 			role: u.role,
-			unitSystem: u.unitSystem ?? s.unitSystem
+			unitSystem: u.unitSystem ?? s.unitSystem,
+			timeZone: s.timeZone
 		};
 	};
 	const [admin, engineer, inspector] = await Promise.all(

@@ -164,6 +164,7 @@ const FIELDS: Record<string, FieldSpec> = {
 	via: t('Joined by'),
 	unitSystem: c('Units', UNIT_SYSTEMS),
 	defaultCode: c('Default code', CODE_LABELS),
+	timeZone: t('Time zone'),
 	active: t('Active'),
 	sessionVersion: t('Session version'),
 	expiresAt: t('Expires'),

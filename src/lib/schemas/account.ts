@@ -1,3 +1,4 @@
+import { isTimeZone } from '$lib/dates/time-zone';
 import { z } from 'zod';
 import { SHOP_CODES } from '$lib/procedures/default-code';
 import { ROLES } from '$lib/roles';
@@ -77,7 +78,11 @@ export const shopSettingsSchema = z.object({
 		.max(120, 'Keep it under 120 characters.'),
 	unitSystem: z.enum(['imperial', 'metric'], 'Pick imperial or metric.'),
 	// Issue 15: what new procedures, PQRs and welder qualifications start from; each can differ.
-	defaultCode: z.enum(SHOP_CODES, 'Pick the code the shop mostly works to.')
+	defaultCode: z.enum(SHOP_CODES, 'Pick the code the shop mostly works to.'),
+	// Migration 0015: the shop's day for continuity and the clock its audit trail reads in.
+	timeZone: z
+		.string('Pick the shop\u2019s time zone.')
+		.refine(isTimeZone, 'Pick the shop\u2019s time zone from the list.')
 });
 
 export const profileSchema = z.object({

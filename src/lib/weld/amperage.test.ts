@@ -109,9 +109,13 @@ describe('amps for wire and rod size', () => {
 		expect(fillerAmpBand('GTAW', 3.2)?.band).toEqual({ min: 100, max: 165 }); // common practice, no source
 		expect(fillerAmpBand('GTAW', 5)).toBeNull(); // common practice, no source
 	});
-	it('SMAW E7018-type electrode bands (recalled; reference/README.md Unverified) only for F-4 electrodes', () => {
-		// Asserts the row's kind, not a value: the bands themselves are listed as unverified.
-		expect(fillerAmpBand('SMAW', inToMm(1 / 8))?.source.kind).toBe('from memory');
+	it('SMAW E7018-type electrode bands only for F-4 electrodes', () => {
+		// Machinery's Handbook, 31st ed., Table 14, E7018 column (online.flippingbook.com/view/954046886/114)
+		expect(fillerAmpBand('SMAW', inToMm(3 / 32))?.band).toEqual({ min: 70, max: 105 }); // Table 14
+		expect(fillerAmpBand('SMAW', inToMm(1 / 8))?.band).toEqual({ min: 110, max: 160 }); // Table 14
+		expect(fillerAmpBand('SMAW', inToMm(5 / 32))?.band).toEqual({ min: 150, max: 215 }); // Table 14
+		expect(fillerAmpBand('SMAW', inToMm(3 / 16))?.band).toEqual({ min: 180, max: 275 }); // Table 14
+		expect(fillerAmpBand('SMAW', inToMm(1 / 8))?.source.kind).toBe('common practice');
 		const e6010 = { classification: 'E6010', fNumber: 3 } as never;
 		expect(
 			checkAmpsVsFiller({

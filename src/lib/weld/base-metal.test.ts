@@ -15,12 +15,14 @@ describe('spec and grade to P-Number and Group', () => {
 		expect(m('A106-C')).toMatchObject({ pNumber: '1', group: 2 }); // QW/QB-422
 		expect(m('A53 B')).toMatchObject({ pNumber: '1', group: 1 }); // QW/QB-422
 		expect(m('A36').row?.source.kind).toBe('published');
+		// QW/QB-422 (2013), B361 WP6061 P-23 (public copy, anyflip.com/pegaz/aval/basic/251-300)
+		expect(m('6061')).toMatchObject({ family: 'aluminium', pNumber: '23', group: null });
+		expect(m('6061').row?.source.kind).toBe('published');
 	});
 	it('rows from memory are marked so', () => {
 		expect(m('A516-70')).toMatchObject({ pNumber: '1', group: 2 }); // from memory
 		expect(m('304')).toMatchObject({ family: 'stainless', pNumber: '8', group: 1 }); // from memory
 		expect(m('316L')).toMatchObject({ family: 'stainless', pNumber: '8' }); // from memory
-		expect(m('6061')).toMatchObject({ family: 'aluminium', pNumber: '23', group: null }); // from memory
 		expect(m('A516-70').row?.source.kind).toBe('from memory');
 	});
 	it('reads the ways people write specs', () => {

@@ -73,9 +73,10 @@ describe('method A inputs (EN 1011-2 C.2)', () => {
 		[2, 'E'] // <= 3 (same table)
 	])('HD %s -> scale %s', (hd, s) => expect(hydrogenScale(hd)).toBe(s));
 	it.each([
-		// Combined thickness: the sum of the heat paths (EN 1011-2 Annex C) // from memory
-		[[20, 20], 40], // butt weld of two 20 mm plates
-		[[10, 10, 10], 30], // T fillet: three paths
+		// Combined thickness: the sum of the heat paths (EN 1011-2:2001 C.2.4, as reprinted at
+		// gowelding.com/weld/preheat/preheatinfo.htm: all paths taking heat from the weld)
+		[[20, 20], 40], // butt weld of two equal plates: twice the plate (same page)
+		[[10, 10, 10], 30], // T fillet: three times the thickness (same page)
 		[[25, 12], 37]
 	])('combined thickness of %j is %s', (paths, t) => expect(combinedThickness(paths)).toBe(t));
 	it('gives CE, scale and combined thickness and says where to read the preheat', () => {

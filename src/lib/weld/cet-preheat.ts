@@ -108,7 +108,7 @@ export function hydrogenScale(hd: unknown): HydrogenScale | null {
 	return 'A';
 }
 
-/** Combined thickness: the sum of the thicknesses the heat flows into (C.2.3), mm. */
+/** Combined thickness: the sum of the thicknesses the heat flows into (C.2.4), mm. */
 export function combinedThickness(paths: unknown): number | null {
 	if (!Array.isArray(paths) || paths.length === 0 || paths.length > 6) return null;
 	if (!paths.every((p) => isNum(p) && p > 0 && p <= 1000)) return null;

@@ -91,15 +91,15 @@ export const CHECK_CATALOGUE: readonly CatalogueEntry[] = [
 		'gas-flow',
 		'settings',
 		'Shielding gas flow',
-		'Flow against the usual range for the process and gas (GTAW argon 11–35 CFH, GMAW 25–35 CFH).',
-		[S.GAS_FLOW_PRACTICE, S.GAS_FLOW_MEMORY]
+		'Flow against the usual range for the process and gas (GTAW argon 11–35 CFH, GMAW 25–35 CFH, gas-shielded FCAW 25–50 CFH).',
+		[S.GAS_FLOW_PRACTICE, S.GAS_FLOW_FCAW_TEXTBOOK, S.GAS_FLOW_MEMORY]
 	),
 	e(
 		'filler-classification',
 		'settings',
 		'Filler classification',
 		'Reads the AWS classification and what it encodes: spec, minimum tensile, F-Number, A-Number.',
-		[S.AWS_A5_CLASSIFICATION, S.ASME_IX_QW_432, S.ASME_IX_QW_442]
+		[S.AWS_A5_CLASSIFICATION, S.ASME_IX_QW_432, S.AWS_D1_2_FILLER_GROUPS, S.ASME_IX_QW_442]
 	),
 	e(
 		'filler-vs-base-metal',
@@ -113,7 +113,7 @@ export const CHECK_CATALOGUE: readonly CatalogueEntry[] = [
 		'settings',
 		'Base metal grouping',
 		'Spec and grade to family, P-Number and Group.',
-		[S.ASME_IX_QW_422, S.ASME_IX_QW_422_MEMORY]
+		[S.ASME_IX_QW_422, S.ASME_IX_QW_422_2013_AL, S.ASME_IX_QW_422_MEMORY]
 	),
 	e(
 		'preheat',

@@ -33,13 +33,15 @@ describe('D1.1 WPS thickness qualified', () => {
 
 describe('D1.1 WPS diameter and positions', () => {
 	it.each([
-		[60.3, 60.3], // job size under 24 in: the test diameter and over // from memory
-		[610, 609.6], // 24 in and over // from memory
-		[914.4, 609.6] // from memory
+		// AWS D1.1/D1.1M:2015 Table 9.10, job-size test pipes (public copy, ro.scribd.com/document/435989338)
+		[60.3, 60.3], // under 24 in: the test diameter and over
+		[610, 609.6], // 24 in and over: 24 in and over
+		[914.4, 609.6] // 24 in and over: 24 in and over
 	])('OD %s mm -> from %s mm', (od, min) => {
 		const r = d11DiameterRange(od);
 		expect(r).toMatchObject({ ok: true, maxMm: null });
 		expect(r.ok && r.minMm).toBeCloseTo(min, 9);
+		expect(r.ok && r.source.kind).toBe('published');
 	});
 	it.each([
 		[['1G'], ['F']], // from memory

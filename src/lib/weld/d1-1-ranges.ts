@@ -64,7 +64,7 @@ export function d11DiameterRange(odMm: unknown): D11Range | { ok: false; message
 		minMm: odMm < brk ? odMm : brk,
 		maxMm: null,
 		notes: ['Standard test pipes (2, 3, 6 and 8 in) have their own rows; not modelled.'],
-		source: sourceOf(AWS_D1_1_QUALIFICATION)
+		source: sourceOf(D1_1_DIAMETER.source)
 	};
 }
 

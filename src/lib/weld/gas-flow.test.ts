@@ -37,6 +37,10 @@ describe('flow ranges', () => {
 		expect(gasFlowRange('GTAW', g('argon'))?.cfh).toEqual({ min: 11, max: 35 }); // common practice, no source
 		expect(gasFlowRange('GMAW', g('75/25'))?.cfh).toEqual({ min: 25, max: 35 }); // common practice (textbook table)
 		expect(gasFlowRange('GTAW', g('helium'))?.source.kind).toBe('from memory');
+		// Modern Welding (Goodheart-Willcox, 2020) p. 214, Figure 8-35: FCAW-G flows as GMAW's,
+		// carbon and low-alloy steel 25 (1/16 in) to 50 (3/4 in) ft3/h
+		expect(gasFlowRange('FCAW', g('co2'))?.cfh).toEqual({ min: 25, max: 50 });
+		expect(gasFlowRange('FCAW', g('co2'))?.source.kind).toBe('common practice');
 		expect(gasFlowRange('SMAW')).toBeNull();
 	});
 	const flow = (

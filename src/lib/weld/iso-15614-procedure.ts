@@ -171,7 +171,7 @@ export function isoProcedureRanges(input: unknown): {
 					// The ISO designation beside the AWS one, where Beadline has one (iso-filler.ts).
 					...isoFillerDesignations(c.filler.designation, c.process).map(
 						(d) =>
-							`ISO designation beside the AWS one: ${d.designation} (${d.source.kind === 'published' ? d.source.label : 'from memory: check the maker\u2019s certificate'}).`
+							`ISO designation beside the AWS one: ${d.designation} (${d.source.kind === 'from memory' ? 'from memory: check the maker\u2019s certificate' : d.source.label}).`
 					)
 				],
 				source: SRC

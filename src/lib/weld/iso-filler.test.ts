@@ -27,9 +27,14 @@ describe('ISO designations beside AWS classifications', () => {
 		expect([...gmaw, ...gtaw].every((d) => d.source.kind === 'from memory')).toBe(true);
 		expect(isoFillerDesignations('ER70S-6')).toHaveLength(2);
 	});
-	it('aluminium ER4043 to ISO 18273, recalled', () => {
+	it('aluminium ER4043 and ER5356 to ISO 18273, as a filler maker\u2019s sheets give them', () => {
+		// Aufhauser "Aluminum 4043" product sheet: ISO designation AlSi5, AWS A5.10 ER4043
+		// (scribd.com/document/747107065/al-4043); Aufhauser "Aluminum 5356" product sheet: ISO
+		// designation AlMg5Cr(A), ANSI/AWS A5.10 ER & R 5356 (brazing.com/Products/Welding_alloys/alloy5356.aspx)
 		const [d] = isoFillerDesignations('ER4043', 'GTAW');
-		expect(d).toMatchObject({ standard: 'ISO 18273', source: { kind: 'from memory' } }); // from memory
+		expect(d).toMatchObject({ standard: 'ISO 18273', designation: 'ISO 18273 AlSi5' });
+		expect(d!.source.kind).toBe('common practice');
+		expect(isoFillerDesignations('ER5356')[0]!.designation).toContain('AlMg5Cr(A)');
 	});
 	it('an unknown or hostile classification answers no rows, never a guess', () => {
 		for (const x of ['E7018', '', null, 42, {}, 'ER70S-6'.repeat(20)])

@@ -8,7 +8,7 @@ import type { PageServerLoad } from './$types';
 export const load: PageServerLoad = async (event) => {
 	const user = requireRole(event, ...VIEW_ROLES);
 	const filter = overviewFilterSchema.parse(Object.fromEntries(event.url.searchParams));
-	const today = localDay();
+	const today = localDay(new Date(), user.timeZone);
 	const rows = await overviewRows(user.shopId, today, filter);
 	return { rows, filter, today, canManage: MANAGE_ROLES.includes(user.role) };
 };

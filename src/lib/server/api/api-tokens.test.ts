@@ -20,7 +20,8 @@ async function adminOf(email: string) {
 		name: u.name,
 		email: u.email,
 		role: u.role,
-		unitSystem: 'imperial' as const
+		unitSystem: 'imperial' as const,
+		timeZone: 'UTC'
 	};
 }
 

@@ -1,3 +1,4 @@
+import { zoneOr } from '$lib/dates/time-zone';
 import type { RequestEvent } from '@sveltejs/kit';
 import { createHash, randomBytes } from 'node:crypto';
 import { Op, QueryTypes } from 'sequelize';
@@ -100,6 +101,7 @@ interface TokenRow {
 	shop_id: number;
 	shop_name: string;
 	unit_system: SessionUser['unitSystem'];
+	time_zone: string;
 	user_id: string;
 	email: string;
 	active: boolean | number;
@@ -108,7 +110,7 @@ interface TokenRow {
 // One indexed lookup (token_hash is unique) with its shop and creator, as plain rows: this runs
 // on every API call, and nothing here is saved back through a model.
 const TOKEN_SQL = `SELECT t.id, t.name, t.role, t.last_used_at, s.id AS shop_id,
-	s.name AS shop_name, s.unit_system, u.id AS user_id, u.email, u.active
+	s.name AS shop_name, s.unit_system, s.time_zone, u.id AS user_id, u.email, u.active
 	FROM api_tokens t JOIN shops s ON s.id = t.shop_id JOIN users u ON u.id = t.created_by_id
 	WHERE t.token_hash = ? AND t.revoked_at IS NULL`;
 
@@ -146,6 +148,7 @@ export async function memberForToken(secret: string): Promise<SessionUser | null
 		name: `${token.name} (API token)`,
 		email: token.email,
 		role: token.role,
-		unitSystem: token.unit_system
+		unitSystem: token.unit_system,
+		timeZone: zoneOr(token.time_zone)
 	};
 }

@@ -3,6 +3,7 @@
 // decides access — active, role, session version — and both rows' updated_at. If any of it
 // differs from the cached copy, the member is read again. Several server processes on one
 // database stay right, because the check is the database's answer, not a process's memory.
+import { zoneOr } from '$lib/dates/time-zone';
 import { QueryTypes } from 'sequelize';
 import type { Role } from '$lib/roles';
 import { sequelize } from '../db/sequelize';
@@ -33,6 +34,7 @@ interface FullRow extends Row {
 	shop_id: number;
 	shop_name: string;
 	shop_unit_system: UnitSystem;
+	shop_time_zone: string;
 }
 
 /** Entries live this long at most, so a process never holds a member it has not checked lately. */
@@ -61,7 +63,7 @@ const STAMP_SQL = `SELECT u.active, u.role, u.session_version, u.updated_at AS u
 
 const FULL_SQL = `SELECT u.id, u.name, u.email, u.unit_system, u.active, u.role, u.session_version,
 	u.updated_at AS user_at, s.id AS shop_id, s.name AS shop_name,
-	s.unit_system AS shop_unit_system, s.updated_at AS shop_at
+	s.unit_system AS shop_unit_system, s.time_zone AS shop_time_zone, s.updated_at AS shop_at
 	FROM users u JOIN shops s ON s.id = u.shop_id WHERE u.id = ?`;
 
 async function one<T extends object>(sql: string, id: string): Promise<T | undefined> {
@@ -81,7 +83,8 @@ async function load(id: string, sv: number): Promise<{ stamp: Stamp; member: Ses
 		name: r.name,
 		email: r.email,
 		role: r.role as Role,
-		unitSystem: r.unit_system ?? r.shop_unit_system
+		unitSystem: r.unit_system ?? r.shop_unit_system,
+		timeZone: zoneOr(r.shop_time_zone)
 	};
 	return stamp.active && stamp.sessionVersion === sv ? { stamp, member } : null;
 }

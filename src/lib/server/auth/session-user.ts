@@ -10,4 +10,6 @@ export interface SessionUser {
 	email: string;
 	role: Role;
 	unitSystem: UnitSystem;
+	/** The shop's IANA time zone (migration 0015): its calendar day and the times it reads. */
+	timeZone: string;
 }

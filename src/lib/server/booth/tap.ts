@@ -39,7 +39,7 @@ export async function tapContinuity(
 			actor: { id: user.id, name: user.name },
 			event,
 			...(queued && {
-				date: localDay(queued.madeAt),
+				date: localDay(queued.madeAt, user.timeZone),
 				tap: { ...queued, linkId: status.link.id }
 			})
 		});

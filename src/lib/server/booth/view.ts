@@ -57,7 +57,7 @@ export async function memberView(
 		rejectOnEmpty: true
 	});
 	const { variables: v } = readVariables(revision);
-	const today = localDay();
+	const today = localDay(new Date(), user.timeZone);
 	const [integrity, signOff, pqrLinks, welder] = await Promise.all([
 		checkIntegrity(revision.id),
 		SignOff.findOne({

@@ -27,7 +27,7 @@ export async function recordOverride(
 	);
 	const welder = await Welder.findOne({ where: { id: input.welderId, shopId: actor.shopId } });
 	if (!welder) throw new NotFoundError('No such welder in your shop.');
-	const check = await checkWeld(actor.shopId, joint, welder, localDay());
+	const check = await checkWeld(actor.shopId, joint, welder, localDay(new Date(), actor.timeZone));
 	if (check.kind === 'revision')
 		throw new RefusedError(`An override cannot put a revision in force. ${check.refusal}`);
 	if (!check.refusal)

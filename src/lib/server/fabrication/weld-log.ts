@@ -58,7 +58,7 @@ export async function logWeld(
 	const { joint, job } = await findJoint(actor.shopId, input.jointId, input.jobId);
 	const welder = await Welder.findOne({ where: { shopId: actor.shopId, userId: actor.id } });
 	if (!welder) throw new RefusedError(NOT_A_WELDER);
-	const today = localDay(now);
+	const today = localDay(now, actor.timeZone);
 	// A repair round is welded to the repair's procedure revision.
 	const repair = await JointRepair.findOne({
 		where: { jointId: joint.id },

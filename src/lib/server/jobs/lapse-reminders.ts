@@ -76,7 +76,9 @@ export async function runLapseReminders(
 		const admins = await User.findAll({
 			where: { shopId: shop.id, role: 'admin', active: true, email: { [Op.ne]: '' } }
 		});
-		for (const w of await loadWelders(shop.id, today, { activeOnly: true })) {
+		// Each shop's own day: a qualification lapses at midnight where the shop is.
+		const day = localDay(now, shop.timeZone);
+		for (const w of await loadWelders(shop.id, day, { activeOnly: true })) {
 			for (const q of w.qualifications) {
 				run.checked++;
 				if (q.status.state === 'withdrawn') continue;

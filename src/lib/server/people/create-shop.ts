@@ -1,3 +1,4 @@
+import { machineZone } from '$lib/dates/time-zone';
 import type { RequestEvent } from '@sveltejs/kit';
 import { UniqueConstraintError } from 'sequelize';
 import type { z } from 'zod';
@@ -24,7 +25,9 @@ export async function createShop(
 	try {
 		return await write(async (t) => {
 			if (await emailTaken(input.email, t)) throw new RefusedError(EMAIL_TAKEN, 'email');
-			const shop = await Shop.create({ name: input.shopName }, { transaction: t });
+			// The machine's zone until the admin names the shop's own on the shop page.
+			const timeZone = machineZone();
+			const shop = await Shop.create({ name: input.shopName, timeZone }, { transaction: t });
 			const user = await User.create(
 				{
 					shopId: shop.id,

@@ -12,6 +12,12 @@ const { RefusedError } = await import('./errors');
 const { changePassword, getProfile, signOutMyDevices, updateProfile } = await import('./profile');
 const { getShopSettings, shopDefaultCode, updateShopSettings } = await import('./shop-settings');
 const { addMember, newShop } = await import('./test-support');
+const { shopDay } = await import('../welders/shop-day');
+const { localDay } = await import('../welders/dates');
+const { memberFor } = await import('../auth/member-cache');
+const { machineZone: zoneOfMachine } = await import('$lib/dates/time-zone');
+// New shops start in the machine's zone (create-shop.ts).
+const machineZone = zoneOfMachine();
 
 type ShopFixture = Awaited<ReturnType<typeof newShop>>;
 let a: ShopFixture;
@@ -59,12 +65,14 @@ describe('shop settings', () => {
 		expect(await getShopSettings(a.admin)).toEqual({
 			name: 'Profile A renamed',
 			unitSystem: 'metric',
-			defaultCode: 'asme-ix'
+			defaultCode: 'asme-ix',
+			timeZone: machineZone
 		});
 		expect(await getShopSettings(b.admin)).toEqual({
 			name: 'Profile B',
 			unitSystem: 'imperial',
-			defaultCode: 'asme-ix'
+			defaultCode: 'asme-ix',
+			timeZone: machineZone
 		});
 		const welder = await addMember(a.shopId, 'welder');
 		await expect(
@@ -84,5 +92,24 @@ describe('shop settings', () => {
 		expect(await getShopSettings(c.admin)).toMatchObject({ defaultCode: 'iso-15614-1' });
 		expect(await shopDefaultCode(c.shopId)).toBe('iso-15614-1');
 		expect(await shopDefaultCode(a.shopId)).toBe('asme-ix');
+	});
+
+	it('names the shop\u2019s time zone: its day, and its members\u2019 clock (migration 0015)', async () => {
+		const d = await newShop('Profile D');
+		await updateShopSettings(d.admin, {
+			name: 'Profile D',
+			unitSystem: 'imperial',
+			timeZone: 'America/Chicago'
+		});
+		// Left out by a caller, the zone stays.
+		await updateShopSettings(d.admin, { name: 'Profile D', unitSystem: 'metric' });
+		expect(await getShopSettings(d.admin)).toMatchObject({ timeZone: 'America/Chicago' });
+		// 02:00 UTC on 4 December is 20:00 on the 3rd in Chicago (IANA tz database, CST = UTC−6).
+		expect(await shopDay(d.shopId, new Date('2026-12-04T02:00:00Z'))).toBe('2026-12-03');
+		expect(await shopDay(a.shopId, new Date('2026-12-04T02:00:00Z'))).toBe(
+			localDay(new Date('2026-12-04T02:00:00Z'), machineZone)
+		);
+		// The session's member carries it from the next request on (the shop row changed).
+		expect((await memberFor(d.admin.id, 1))?.timeZone).toBe('America/Chicago');
 	});
 });

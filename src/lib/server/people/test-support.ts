@@ -21,7 +21,8 @@ export async function asSessionUser(userId: string): Promise<SessionUser> {
 		name: u.name,
 		email: u.email,
 		role: u.role,
-		unitSystem: u.unitSystem ?? shop.unitSystem
+		unitSystem: u.unitSystem ?? shop.unitSystem,
+		timeZone: shop.timeZone
 	};
 }
 

@@ -22,11 +22,14 @@ export interface TrailEntry {
 }
 
 /**
- * How the reader sees values: their unit system. Times: the server does not know the reader's
- * zone and shops have no zone setting yet, so moments read in UTC and say so ("23:02 UTC"), with
- * the exact instant in the page's <time datetime>. A shop zone, once there is one, goes here.
+ * How the reader sees values: their unit system, and moments on the shop's clock with the zone
+ * named ("23:02 America/Chicago"); the exact instant stays in the page's <time datetime> and the
+ * raw view, and the CSV/JSON export keeps UTC.
  */
-const readingOf = (actor: SessionUser): Reading => ({ system: actor.unitSystem });
+const readingOf = (actor: SessionUser): Reading => ({
+	system: actor.unitSystem,
+	timeZone: actor.timeZone
+});
 
 const parse = (s: string | null): unknown => {
 	if (s === null) return undefined;

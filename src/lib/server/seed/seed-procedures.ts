@@ -24,7 +24,8 @@ export async function member(email: string, shop: Shop): Promise<SessionUser | n
 				name: u.name,
 				email: u.email,
 				role: u.role,
-				unitSystem: 'imperial'
+				unitSystem: 'imperial',
+				timeZone: shop.timeZone
 			}
 		: null;
 }

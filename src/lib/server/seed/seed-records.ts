@@ -182,7 +182,8 @@ async function asMember(email: string, shop: Shop): Promise<SessionUser | null> 
 		name: u.name,
 		email: u.email,
 		role: u.role,
-		unitSystem: 'imperial'
+		unitSystem: 'imperial',
+		timeZone: shop.timeZone
 	};
 }
 

@@ -161,7 +161,8 @@ async function seedExtras(shop: Shop, admin: User, today: string): Promise<void>
 		name: admin.name,
 		email: admin.email,
 		role: admin.role,
-		unitSystem: 'imperial' as const
+		unitSystem: 'imperial' as const,
+		timeZone: shop.timeZone
 	};
 	for (const x of EXTRAS(today)) {
 		const created = await write(async (t) => {
@@ -196,7 +197,7 @@ async function seedExtras(shop: Shop, admin: User, today: string): Promise<void>
 }
 
 export async function seedWelders(shop: Shop, now: Date = new Date()): Promise<void> {
-	const today = localDay(now);
+	const today = localDay(now, shop.timeZone);
 	const admin = await User.findOne({
 		where: { shopId: shop.id, role: 'admin' },
 		order: [['createdAt', 'ASC']]

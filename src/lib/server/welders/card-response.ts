@@ -20,7 +20,7 @@ const safe = (s: string) =>
 export async function cardResponse(event: RequestEvent, user: SessionUser, welderId: number) {
 	const size = (event.url.searchParams.get('size') ?? 'wallet') as CardSize;
 	if (!SIZES.includes(size)) error(400, { message: 'Pick wallet, a4 or letter.' });
-	const today = localDay();
+	const today = localDay(new Date(), user.timeZone);
 	const welder = await welderView(user.shopId, welderId, today).catch(rethrowAsHttp);
 	const { token } = await liveLink(user, welderId, event);
 	const bytes = await qualificationCardPdf({

@@ -18,7 +18,7 @@ import {
 import type { ContinuitySource } from '../models/continuity-entry';
 import { ForbiddenError, NotFoundError, RefusedError } from '../people/errors';
 import { actingMember, MANAGE_ROLES } from './access';
-import { localDay } from './dates';
+import { shopDay } from './shop-day';
 import { findWelder } from './welders';
 
 export interface RecordContinuityInput {
@@ -58,7 +58,7 @@ const PROCESSES: readonly string[] = ['GTAW', 'GMAW', 'FCAW', 'SMAW'];
  * this welder) or RefusedError (bad date, process or missing note).
  */
 export async function recordContinuity(input: RecordContinuityInput): Promise<RecordedUse> {
-	const today = localDay();
+	const today = await shopDay(input.shopId);
 	const usedOn = input.date ?? today;
 	if (!parseDate(usedOn)) throw new RefusedError('Enter the date as YYYY-MM-DD.', 'usedOn');
 	if (usedOn > today) throw new RefusedError('The date is in the future.', 'usedOn');
@@ -198,7 +198,7 @@ export async function recordConfirmation(
 	input: { qualificationId: number; confirmedOn: string; responsiblePerson: string; note: string },
 	event: RequestEvent | null = null
 ): Promise<{ id: number }> {
-	if (input.confirmedOn > localDay())
+	if (input.confirmedOn > (await shopDay(actor.shopId)))
 		throw new RefusedError('The date is in the future.', 'confirmedOn');
 	return write(async (t) => {
 		const me = await actingMember(actor, MANAGE_ROLES, t);

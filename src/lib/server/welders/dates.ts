@@ -1,10 +1,10 @@
-// Calendar days for continuity. The server's local day is the shop's day: a tap at 8 pm must not
-// land on tomorrow, as it would in UTC for a shop west of Greenwich. Run the server in the shop's
-// time zone (TZ) when it differs from the machine's.
-const pad = (n: number) => String(n).padStart(2, '0');
+// Calendar days for continuity. A day is the shop's day: a tap at 8 pm in Chicago must not land
+// on tomorrow, as it would in UTC. Callers pass the shop's zone (shops.time_zone, migration
+// 0015); with none given it is the machine's, which is also where new shops start.
+import { dayIn, machineZone } from '$lib/dates/time-zone';
 
-export function localDay(now: Date = new Date()): string {
-	return `${now.getFullYear()}-${pad(now.getMonth() + 1)}-${pad(now.getDate())}`;
+export function localDay(now: Date = new Date(), timeZone?: string | null): string {
+	return dayIn(now, timeZone ?? machineZone());
 }
 
 /** Adds whole days to a 'YYYY-MM-DD' date (calendar arithmetic in UTC, no DST surprises). */

@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { asmeToIsoSource } from '$reference/iso-6947';
 import { withIso6947 } from '$lib/weld/iso-9606-ranges';
 import { isoRangesFor } from './iso-ranges';
 import { qualifiedRanges } from './ranges';
@@ -22,7 +23,8 @@ describe('ISO 9606-1 qualifications in their own terms', () => {
 		const by = Object.fromEntries((r.iso ?? []).map((i) => [i.variable, i.qualified]));
 		expect(by['Process']).toBe('135 and 138'); // ISO 9606-1:2012 5.2
 		expect(by['Material thickness']).toBe('3–20 mm'); // 3 to 2t, ISO 9606-1:2012 Table 6
-		// PF qualifies PA, PF (ISO 9606-1:2012 Table 9); 3G read as PF is the ISO 6947 reading // from memory
+		// PF qualifies PA, PF (ISO 9606-1:2012 Table 9); 3G uphill is PF in ISO 6947:2011 Annex B
+		// Table B.1 (read in GOST R ISO 6947-2017, identical, docs.cntd.ru/document/1200144942)
 		expect(by['Welding positions (ISO 6947)']).toBe('PA, PF');
 		expect(r.codeNote).toContain('for comparison');
 	});
@@ -39,5 +41,7 @@ describe('ISO 9606-1 qualifications in their own terms', () => {
 	});
 	it('prints ISO 6947 beside the ASME test positions', () => {
 		expect(withIso6947(['3G', '2F', 'X'])).toBe('3G (PF/PG), 2F (PB), X');
+		// ISO 6947:2011 Table B.1: 3G uphill PF, downhill PG; 2F PB (GOST R ISO 6947-2017, identical)
+		expect(asmeToIsoSource('3G').kind).toBe('published');
 	});
 });

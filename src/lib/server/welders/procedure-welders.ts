@@ -26,11 +26,11 @@ export function describeRevision(v: RevisionVariables): ProcedureDescription {
 }
 
 export async function weldersForProcedure(
-	actor: Pick<SessionUser, 'shopId'>,
+	actor: Pick<SessionUser, 'shopId' | 'timeZone'>,
 	procedure: ProcedureDescription,
 	now: Date = new Date()
 ): Promise<ProcedureWelders> {
-	const today = localDay(now);
+	const today = localDay(now, actor.timeZone);
 	const welders = await loadWelders(actor.shopId, today, { activeOnly: true });
 	return { asOf: today, matches: matchWelders(procedure, welders) };
 }

@@ -1,5 +1,5 @@
 import { error } from '@sveltejs/kit';
-import { localDay } from '$lib/server/welders/dates';
+import { shopDay } from '$lib/server/welders/shop-day';
 import { welderView } from '$lib/server/welders/read';
 import { resolveToken } from '$lib/server/welders/verification';
 import { verifyLimiter } from '$lib/server/welders/verify-limit';
@@ -19,7 +19,7 @@ export const load: PageServerLoad = async (event) => {
 			message:
 				'This card has been withdrawn by the shop that issued it. Ask them for the current card.'
 		});
-	const today = localDay();
+	const today = await shopDay(link.shopId);
 	const w = await welderView(link.shopId, link.welderId, today);
 	const member = event.locals.user?.shopId === link.shopId ? event.locals.user : null;
 	const qualifications = w.qualifications.map((q) => ({

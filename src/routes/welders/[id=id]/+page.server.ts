@@ -20,7 +20,7 @@ import { postedForm } from '$lib/server/forms/posted-form';
 export const load: PageServerLoad = async (event) => {
 	const user = requireRole(event, ...VIEW_ROLES);
 	const id = Number(event.params.id);
-	const today = localDay();
+	const today = localDay(new Date(), user.timeZone);
 	const welder = await welderView(user.shopId, id, today).catch(rethrowAsHttp);
 	const firstProcess = welder.qualifications[0]?.process ?? 'GTAW';
 	const iso = welder.qualifications.find((q) => q.code === 'ISO 9606-1');

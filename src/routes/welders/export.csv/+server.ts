@@ -9,7 +9,7 @@ import type { RequestHandler } from './$types';
 export const GET: RequestHandler = async (event) => {
 	const user = requireRole(event, ...VIEW_ROLES);
 	const filter = overviewFilterSchema.parse(Object.fromEntries(event.url.searchParams));
-	const today = localDay();
+	const today = localDay(new Date(), user.timeZone);
 	const body = overviewCsv(await overviewRows(user.shopId, today, filter));
 	return new Response(body, {
 		headers: {

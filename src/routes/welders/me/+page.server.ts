@@ -13,7 +13,7 @@ import { postedForm } from '$lib/server/forms/posted-form';
 export const load: PageServerLoad = async (event) => {
 	const user = requireMember(event);
 	const w = await welderOfUser(user);
-	const today = localDay();
+	const today = localDay(new Date(), user.timeZone);
 	if (!w) return { welder: null, today, units: user.unitSystem };
 	return { welder: await welderView(user.shopId, w.id, today), today, units: user.unitSystem };
 };

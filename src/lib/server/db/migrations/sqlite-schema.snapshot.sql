@@ -184,7 +184,7 @@ CREATE TABLE 'settings_records_fts_docsize'(id INTEGER PRIMARY KEY, sz BLOB);
 
 CREATE TABLE 'settings_records_fts_idx'(segid, term, pgno, PRIMARY KEY(segid, term)) WITHOUT ROWID;
 
-CREATE TABLE `shops` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `name` VARCHAR(120) NOT NULL, `unit_system` VARCHAR(10) NOT NULL DEFAULT 'imperial', `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL, `default_code` VARCHAR(16) NOT NULL DEFAULT 'asme-ix');
+CREATE TABLE `shops` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `name` VARCHAR(120) NOT NULL, `unit_system` VARCHAR(10) NOT NULL DEFAULT 'imperial', `created_at` DATETIME NOT NULL, `updated_at` DATETIME NOT NULL, `default_code` VARCHAR(16) NOT NULL DEFAULT 'asme-ix', `time_zone` VARCHAR(64) NOT NULL DEFAULT 'UTC');
 
 CREATE TABLE `sign_offs` (`id` INTEGER PRIMARY KEY AUTOINCREMENT, `shop_id` INTEGER NOT NULL REFERENCES `shops` (`id`), `revision_id` INTEGER NOT NULL REFERENCES `procedure_revisions` (`id`), `user_id` UUID NOT NULL REFERENCES `users` (`id`), `printed_name` VARCHAR(120) NOT NULL, `role` VARCHAR(20) NOT NULL, `meaning` VARCHAR(12) NOT NULL, `comment` TEXT, `signed_at` DATETIME NOT NULL, `digest` VARCHAR(64) NOT NULL, `canonical` TEXT NOT NULL, `seal` VARCHAR(64) NOT NULL);
 

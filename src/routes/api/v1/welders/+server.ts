@@ -10,7 +10,7 @@ import { welderApiSchema } from '$lib/schemas/welder';
 /** Every welder of the caller's shop with each qualification's status today. */
 export const GET = api(async (event) => {
 	const user = await apiMember(event, ...VIEW_ROLES);
-	const today = localDay();
+	const today = localDay(new Date(), user.timeZone);
 	const welders = await loadWelders(user.shopId, today);
 	return json({ asOf: today, welders: welders.map((w) => welderJson(w, today, false)) });
 });
