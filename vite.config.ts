@@ -7,7 +7,18 @@ export default defineConfig({
 	build: {
 		// Rolldown's "plugins took long" notice measures the machine, not the code: on shared
 		// cores it comes and goes. Every other build warning fails `npm test` (scripts/test.ts).
-		rolldownOptions: { checks: { bundlerTimings: false } }
+		rolldownOptions: {
+			checks: { bundlerTimings: false },
+			// The weld core and the reference tables are pure (DEVELOPERS.md): importing one name
+			// from the `$lib/weld` barrel must not bring every module behind it. Their top-level
+			// tables are built with calls (maps, lookups) that the bundler cannot prove pure, so
+			// without this each page that shows one weld value carried the whole core.
+			treeshake: {
+				moduleSideEffects: [
+					{ test: /[\\/](src[\\/]lib[\\/]weld|reference)[\\/]/, sideEffects: false }
+				]
+			}
+		}
 	},
 	test: {
 		include: ['src/**/*.test.ts', 'scripts/**/*.test.ts'],

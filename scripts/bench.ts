@@ -1,11 +1,14 @@
 // npm run bench [-- --db sqlite|postgres --no-build --seconds 10 --connections 10 --no-lighthouse --no-js --keep]
+//                [--only health,checks-token,checks-session,procedures,records-filter,booth-out,booth-welder]
 // Builds and starts the production server on a throw-away seeded database, grows one shop from
 // 1k to 100k settings records (timing its list at each size), then loads each route with
 // autocannon beside a bare SvelteKit probe app (scripts/bench/probe/, same Kit, adapter and Node)
 // started in the same run, sends 10,000 mixed requests and reads the server's memory, measures
 // each page's JavaScript in Chromium, times the procedure sheet, audits two pages with
 // Lighthouse, loads the filtered list with 1 and 3 processes behind a round-robin proxy, and
-// prints the goals of issue 13 as met / short. Figures also go to bench-results/. With
+// prints the goals of issue 13 as met / short. `--only <route ids>` is the quick A/B run: the
+// probe and the named routes' throughput only (no growth timings, mixed requests, JS, sheets,
+// Lighthouse or multi-process phases); the shop is still grown to 100k when the filtered list is named. Figures also go to bench-results/. With
 // `--db postgres` the seed is copied into a throw-away PostgreSQL cluster and everything runs there.
 import { spawn, spawnSync } from 'node:child_process';
 import { existsSync, mkdtempSync, rmSync } from 'node:fs';
@@ -17,7 +20,7 @@ import { signInCookie, timeSequential, waitFor } from './bench/http';
 import { measureClientJs } from './bench/client-js';
 import { goalRows, printGoals } from './bench/goals';
 import { load, type LoadResult, type Route } from './bench/load';
-import { memoryMb, mixedRequests } from './bench/mixed';
+import { cpuMs, memoryMb, mixedRequests } from './bench/mixed';
 import { freePort } from './bench/ports';
 import { startProbe } from './bench/probe';
 import { benchPerson, prepareBench } from './bench/prepare';
@@ -32,6 +35,8 @@ const arg = (name: string, fallback: number) => {
 	return i >= 0 ? Number(process.argv[i + 1]) : fallback;
 };
 const flag = (name: string) => process.argv.includes(name);
+/** `--only a,b`: the throughput of these route ids beside the probe, and nothing else. */
+const ONLY = flag('--only') ? process.argv[process.argv.indexOf('--only') + 1]!.split(',') : null;
 const SECONDS = arg('--seconds', 10);
 const CONNECTIONS = arg('--connections', 10);
 const DB = (
@@ -122,9 +127,10 @@ const filter = '/records?process=GTAW&family=carbon-steel&tmin=1%2F16&tmax=1%2F4
 // ---- list latency as the shop grows ----
 const growth: GrowthRow[] = [];
 const growStart = Date.now();
-for (const size of GROWTH) {
+for (const size of ONLY ? (ONLY.includes('records-filter') ? GROWTH.slice(-1) : []) : GROWTH) {
 	const t = Date.now();
 	await topUp(size);
+	if (ONLY) continue;
 	if (size > GROWTH[0]!)
 		console.log(`  grew the shop to ${size} records in ${(Date.now() - t) / 1000} s`);
 	await store.settle();
@@ -166,7 +172,7 @@ const checksBody = JSON.stringify({
 	gas: { name: 'argon', flow: { value: 20, unit: 'CFH' } }
 });
 const json = { 'content-type': 'application/json' };
-const routes: Route[] = [
+const allRoutes: Route[] = [
 	{ id: 'health', name: '/api/v1/health', path: '/api/v1/health' },
 	{
 		id: 'checks-token',
@@ -198,52 +204,82 @@ const routes: Route[] = [
 			]
 		: [])
 ];
+const routes = ONLY ? allRoutes.filter((r) => ONLY.includes(r.id!)) : allRoutes;
 const loadOpts = { seconds: SECONDS, connections: CONNECTIONS };
+const loadAtStart = loadAverage();
 process.stdout.write('  loading the bare probe … ');
 const probeApp = await startProbe();
-const probe = await load(probeApp.origin, { name: 'bare SvelteKit probe', path: '/' }, loadOpts);
-await probeApp.stop();
-console.log(`${probe.reqPerSec} req/s`);
+/** Server CPU ms per answered request over one load run (`--only` prints it). */
+const cpuPerRequest: [name: string, ms: number][] = [];
+const measured = async (pid: number, run: () => Promise<LoadResult>) => {
+	const before = cpuMs(pid);
+	const res = await run();
+	cpuPerRequest.push([res.name, (cpuMs(pid) - before) / Math.max(1, res.requests)]);
+	return res;
+};
+const firstProbe = await measured(probeApp.server.pid!, () =>
+	load(probeApp.origin, { name: 'bare SvelteKit probe', path: '/' }, loadOpts)
+);
+if (!ONLY) await probeApp.stop();
+console.log(`${firstProbe.reqPerSec} req/s`);
 const results: LoadResult[] = [];
 for (const r of routes) {
 	process.stdout.write(`  loading ${r.name} … `);
-	const res = await load(origin, r, loadOpts);
-	res.ratioToBare = res.reqPerSec / probe.reqPerSec;
-	results.push(res);
-	console.log(`${res.reqPerSec} req/s`);
+	results.push(await measured(server.pid!, () => load(origin, r, loadOpts)));
+	console.log(`${results.at(-1)!.reqPerSec} req/s`);
 }
+// A quick run on a shared machine: the probe again after the routes, and shares of the mean of
+// both probe runs, so a load that changed during the run moves the ceiling as well.
+let probe = firstProbe;
+if (ONLY) {
+	process.stdout.write('  loading the bare probe again … ');
+	const again = await measured(probeApp.server.pid!, () =>
+		load(probeApp.origin, { name: 'bare SvelteKit probe', path: '/' }, loadOpts)
+	);
+	await probeApp.stop();
+	console.log(`${again.reqPerSec} req/s`);
+	probe = { ...firstProbe, reqPerSec: Math.round((firstProbe.reqPerSec + again.reqPerSec) / 2) };
+	notes.push(`Load average when the probe started: ${loadAtStart.join(' / ')}.`);
+	notes.push(
+		`Probe ${firstProbe.reqPerSec} req/s before the routes, ${again.reqPerSec} after; shares of the mean.`
+	);
+}
+for (const res of results) res.ratioToBare = res.reqPerSec / probe.reqPerSec;
 
 // ---- 10,000 mixed requests, then the server's memory ----
-const mixed = await mixedRequests(origin, routes, 10_000, CONNECTIONS);
-const rssAfterMixed = memoryMb(server.pid!);
-console.log(
-	`  10,000 mixed requests: RSS ${rssAfterMixed.afterMb} MB (peak ${rssAfterMixed.peakMb})`
-);
+const mixed = ONLY ? undefined : await mixedRequests(origin, routes, 10_000, CONNECTIONS);
+const rssAfterMixed = mixed ? memoryMb(server.pid!) : undefined;
+if (rssAfterMixed)
+	console.log(
+		`  10,000 mixed requests: RSS ${rssAfterMixed.afterMb} MB (peak ${rssAfterMixed.peakMb})`
+	);
 
 // ---- each page's JavaScript, in Chromium, as the role that uses it ----
-const js = flag('--no-js')
-	? undefined
-	: await measureClientJs(origin, [
-			{ name: 'signin', path: '/signin' },
-			{ name: 'booth-list', path: '/booth', cookie: welder },
-			{ name: 'procedures', path: '/procedures', cookie: engineer },
-			{ name: 'records', path: '/records', cookie: engineer },
-			{ name: 'record-form', path: '/records/new', cookie: engineer },
-			...(booth ? [{ name: 'booth-view', path: booth }] : []),
-			...(booth ? [{ name: 'booth-view (welder)', path: booth, cookie: welder }] : []),
-			{ name: 'scan', path: '/scan', cookie: welder }
-		]);
+const js =
+	ONLY || flag('--no-js')
+		? undefined
+		: await measureClientJs(origin, [
+				{ name: 'signin', path: '/signin' },
+				{ name: 'booth-list', path: '/booth', cookie: welder },
+				{ name: 'procedures', path: '/procedures', cookie: engineer },
+				{ name: 'records', path: '/records', cookie: engineer },
+				{ name: 'record-form', path: '/records/new', cookie: engineer },
+				...(booth ? [{ name: 'booth-view', path: booth }] : []),
+				...(booth ? [{ name: 'booth-view (welder)', path: booth, cookie: welder }] : []),
+				{ name: 'scan', path: '/scan', cookie: welder }
+			]);
 
 // ---- the procedure sheet: the booth engineer's timing part (it prints its own table) ----
 let sheets: BenchFigures['sheets'];
-if (existsSync('scripts/bench/sheets.ts')) {
+if (ONLY) notes.push(`--only ${ONLY.join(',')}: throughput of these routes beside the probe only.`);
+else if (existsSync('scripts/bench/sheets.ts')) {
 	const { benchSheets } = await import('./bench/sheets');
 	sheets = await benchSheets({ origin, cookie: engineer, ...fx.approved });
 } else notes.push('scripts/bench/sheets.ts is not there yet: sheet PDF timing left out.');
 
 // ---- Lighthouse on the login page and the booth view ----
 let lighthouse: BenchFigures['lighthouse'];
-if (!flag('--no-lighthouse')) {
+if (!ONLY && !flag('--no-lighthouse')) {
 	const { audit } = await import('./bench/lighthouse');
 	lighthouse = await audit(
 		origin,
@@ -270,8 +306,8 @@ const serverGone = new Promise((r) => server.once('exit', r));
 server.kill('SIGTERM');
 await serverGone;
 // The filtered list again, now with 1 and with 3 processes on the same database.
-const filterRoute = routes.find((r) => r.id === 'records-filter')!;
-const multi = await multiProcess(store.env, filterRoute, loadOpts);
+const filterRoute = allRoutes.find((r) => r.id === 'records-filter')!;
+const multi = ONLY ? undefined : await multiProcess(store.env, filterRoute, loadOpts);
 await store.close();
 if (!flag('--keep')) rmSync(dataDir, { recursive: true, force: true });
 else notes.push(`Data kept in ${dataDir}`);
@@ -286,9 +322,9 @@ const figures: BenchFigures = {
 	probe,
 	routes: results,
 	growth,
-	mixed: { ...mixed, rss: rssAfterMixed },
+	mixed: mixed && rssAfterMixed && { ...mixed, rss: rssAfterMixed },
 	js,
-	goals: goalRows({ probe, routes: results, growth, rssAfterMixedMb: rssAfterMixed.afterMb, js }),
+	goals: goalRows({ probe, routes: results, growth, rssAfterMixedMb: rssAfterMixed?.afterMb, js }),
 	sheets,
 	lighthouse,
 	rss,
@@ -297,5 +333,16 @@ const figures: BenchFigures = {
 };
 printFigures(figures);
 printGoals(figures.goals);
+if (ONLY) {
+	// The same shares by CPU: what each route would get of the probe's rate if CPU were all.
+	const probeCpu =
+		cpuPerRequest.filter(([n]) => n === 'bare SvelteKit probe').reduce((a, [, ms]) => a + ms, 0) /
+		2;
+	console.log('\nServer CPU per request (user + system, ms) and the probe’s CPU as a share of it');
+	for (const [name, ms] of cpuPerRequest)
+		console.log(
+			`${name.padEnd(40)} ${ms.toFixed(3).padStart(8)} ms   ${((probeCpu / ms) * 100).toFixed(1).padStart(6)} %`
+		);
+}
 console.log(`\nFigures written to ${writeFigures(figures)}`);
 process.exit(0);

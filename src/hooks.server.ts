@@ -1,5 +1,4 @@
 import type { Handle, HandleServerError, RequestEvent, ServerInit } from '@sveltejs/kit';
-import { sequence } from '@sveltejs/kit/hooks';
 import { currentMember } from '$lib/server/auth/current-member';
 import { MEMBER_HEADER, memberKey } from '$lib/server/auth/member-key';
 import { exitOnConfigError, migrate } from '$lib/server/db';
@@ -23,8 +22,8 @@ export const init: ServerInit = async () => {
 	if (!building) closeOnShutdown();
 };
 
-const securityHeaders: Handle = async ({ event, resolve }) => {
-	const response = await resolve(event);
+/** Every answer's security headers, set on the way out. */
+function secure(event: RequestEvent, response: Response): Response {
 	const h = response.headers;
 	h.set('X-Content-Type-Options', 'nosniff');
 	h.set('Referrer-Policy', 'same-origin');
@@ -36,22 +35,11 @@ const securityHeaders: Handle = async ({ event, resolve }) => {
 		h.set('Content-Security-Policy', "default-src 'none'; frame-ancestors 'none'");
 	}
 	return response;
-};
+}
 
 /** The four Latin faces (WOFF2 only) are in every first paint; loading them late shifts the layout. */
 const FIRST_PAINT_FONTS =
 	/atkinson-hyperlegible-(next|mono)-latin-(400|700)-normal\.[\w-]+\.woff2$/;
-
-/**
- * Auth.js itself only where a session begins or ends: its own routes under /auth (the e-mail
- * link's callback, sign-out, its CSRF token). The sign-in and sign-out actions call it directly.
- */
-const authJs: Handle = async ({ event, resolve }) => {
-	if (!event.url.pathname.startsWith('/auth/')) return resolve(event);
-	// Loaded at the first such request: a process that only serves pages never holds Auth.js.
-	const { authHandle } = await import('$lib/server/auth/auth-js');
-	return authHandle({ event, resolve });
-};
 
 /** Requests no session can change: health, Kit's static files, and API calls with a token. */
 function sessionless(event: RequestEvent): boolean {
@@ -75,7 +63,25 @@ const member: Handle = async ({ event, resolve }) => {
 	return response;
 };
 
-export const handle = sequence(securityHeaders, authJs, member);
+/**
+ * Security headers around Auth.js around the member look-up, as one handle: Kit's `sequence`
+ * wraps each step in a traced span and a request store of its own, which on the health route
+ * cost more than the steps. Auth.js itself runs only where a session begins or ends: its own
+ * routes under /auth (the e-mail link's callback, sign-out, its CSRF token); the sign-in and
+ * sign-out actions call it directly.
+ */
+export const handle: Handle = async ({ event, resolve }) => {
+	if (!event.url.pathname.startsWith('/auth/'))
+		return secure(event, await member({ event, resolve }));
+	// Loaded at the first such request: a process that only serves pages never holds Auth.js.
+	const { authHandle } = await import('$lib/server/auth/auth-js');
+	const response = await authHandle({
+		event,
+		resolve: (e, outer) =>
+			member({ event: e, resolve: (e2, own) => resolve(e2, { ...outer, ...own }) })
+	});
+	return secure(event, response);
+};
 
 export const handleError: HandleServerError = ({ error, status, message }) =>
 	publicError(error, status, message);

@@ -76,7 +76,7 @@ sw.addEventListener('activate', (event) => {
 sw.addEventListener('message', (event) => {
 	const type = (event.data as { type?: string } | null)?.type;
 	if (type === 'flush') event.waitUntil(flushCurrent());
-	// A page asks which deployment serves it, and since when (OfflineAgent.svelte).
+	// A page asks which deployment serves it, and since when (src/lib/offline/agent.js).
 	else if (type === 'version')
 		event.waitUntil(
 			replacedAt().then((at) => event.ports[0]?.postMessage({ version, replacedAt: at }))

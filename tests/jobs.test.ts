@@ -4,6 +4,7 @@
 import { expect, test } from '@playwright/test';
 import sharp from 'sharp';
 import { engineer, inspector, signIn, welder } from './support/people';
+import { readDataBook } from './support/data-book';
 import { uniqueNumber } from './support/procedures';
 
 test.describe.configure({ timeout: 90_000 });
@@ -217,4 +218,48 @@ test('an inspector rejects a joint, a repair is opened, welded and accepted; the
 	await expect(w4.getByTestId('joint-status')).toHaveAttribute('data-status', 'accepted');
 	await expect(w4.getByTestId('joint-steps')).toContainText('Repair 1 to WPS-002 rev 1');
 	await expect(page.locator('[data-count="Repaired"]')).toContainText('1');
+});
+
+test('the data book of the half-done demo job: every digest holds, its QR opens the public check', async ({
+	page,
+	browser
+}) => {
+	await signIn(page, engineer);
+	await page.goto('/jobs');
+	await page.getByRole('link', { name: 'JOB-2026-014' }).click();
+	await expect(page).toHaveURL(/\/jobs\/\d+$/);
+	const panel = page.getByTestId('data-book');
+	const saved = page.waitForEvent('download');
+	await panel.getByRole('button', { name: 'Compile data book' }).click();
+	const download = await saved;
+	expect(download.suggestedFilename()).toMatch(/^data-book-JOB-2026-014-.*\.zip$/);
+	const book = await readDataBook(await download.path());
+	expect(book.mismatches).toEqual([]);
+	expect(book.unlisted).toEqual([]);
+	const kinds = book.manifest.files.map((f) => f.kind);
+	for (const k of ['weld-log', 'procedure-sheet', 'welder-card']) expect(kinds).toContain(k);
+	expect(book.qr).toBe(book.manifest.verifyUrl);
+	const verifyUrl = new URL(book.qr!);
+	expect(verifyUrl.pathname).toMatch(/^\/verify\/[A-Za-z0-9_-]{32}$/);
+
+	await page.reload();
+	await expect(panel.getByTestId('data-books')).toContainText(engineer.name);
+
+	// Whoever holds the book checks it, signed in or not.
+	const anyone = await (await browser.newContext()).newPage();
+	await anyone.goto(verifyUrl.pathname);
+	await expect(anyone.getByTestId('book-job')).toHaveText('Job JOB-2026-014');
+	await expect(anyone.getByTestId('book-compiled')).toContainText(`by ${engineer.name}`);
+	await expect(anyone.getByTestId('book-verdict')).toContainText('Matches');
+	await expect(anyone.getByTestId('book-files')).toContainText('weld-map-and-log-JOB-2026-014.pdf');
+	// A copy dropped on the check is hashed file by file against what the shop compiled.
+	await anyone
+		.getByLabel('The data book ZIP or manifest.json')
+		.setInputFiles(await download.path());
+	await anyone.getByRole('button', { name: 'Check this copy' }).click();
+	await expect(anyone.getByTestId('copy-verdict')).toContainText(
+		'the very data book the shop compiled'
+	);
+	await anyone.goto('/verify/no-such-token-000000000000');
+	await expect(anyone.getByTestId('book-error')).toBeVisible();
 });

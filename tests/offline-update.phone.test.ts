@@ -29,7 +29,7 @@ test.afterAll(async () => {
 const cacheNames = (page: Page, prefix: string) =>
 	page.evaluate(async (p) => (await caches.keys()).filter((k) => k.startsWith(p)).sort(), prefix);
 
-/** The version the worker controlling the page carries, asked as OfflineAgent.svelte asks. */
+/** The version the worker controlling the page carries, asked as src/lib/offline/agent.js asks. */
 const workerVersion = (page: Page) =>
 	page.evaluate(
 		() =>

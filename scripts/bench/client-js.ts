@@ -12,6 +12,8 @@ export interface PageJs {
 	kb: number;
 	/** Whether the QR decoder's chunk was among them (it belongs on the scan page only). */
 	qrDecoder: boolean;
+	/** Each script it loaded and its bytes as served, biggest first (for working on the bundle). */
+	scripts?: { url: string; bytes: number }[];
 }
 
 /** The client chunk that holds jsQR, from Vite's manifest of the client build. */
@@ -52,7 +54,8 @@ export async function measureClientJs(
 				path: p.path,
 				files: got.length,
 				kb: Math.round(got.reduce((n, s) => n + s.bytes, 0) / 102.4) / 10,
-				qrDecoder: !!qr && got.some((s) => s.url.endsWith(qr))
+				qrDecoder: !!qr && got.some((s) => s.url.endsWith(qr)),
+				scripts: got.sort((a, b) => b.bytes - a.bytes)
 			});
 			await context.close();
 		}

@@ -29,3 +29,14 @@ export function memoryMb(pid: number): { afterMb: number; peakMb: number } {
 	const kb = (key: string) => Number(new RegExp(`${key}:\\s+(\\d+)`).exec(status)?.[1] ?? NaN);
 	return { afterMb: Math.round(kb('VmRSS') / 1024), peakMb: Math.round(kb('VmHWM') / 1024) };
 }
+
+/**
+ * CPU time (user + system, ms) the process has used so far. On a shared machine a route's
+ * req/s moves with the other work; the server's own CPU per request moves much less.
+ */
+export function cpuMs(pid: number): number {
+	const stat = readFileSync(`/proc/${pid}/stat`, 'utf8');
+	// Fields after the command name (which may hold spaces) start at field 3; utime, stime are 14, 15.
+	const fields = stat.slice(stat.lastIndexOf(')') + 2).split(' ');
+	return ((Number(fields[11]) + Number(fields[12])) * 1000) / 100;
+}

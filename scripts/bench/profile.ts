@@ -1,8 +1,9 @@
-// node --import tsx scripts/bench/profile.ts [--seconds 5 --records 10000 --out DIR]
+// node --import tsx scripts/bench/profile.ts [--seconds 5 --records 10000 --out DIR --only health,booth-out]
 // Where a request's time goes: the built server runs under `node --cpu-prof` on a throw-away
 // seeded database, each hot route is loaded in turn, and the server's CPU profile is summed by
 // function (self time) and printed as a top list. The .cpuprofile files stay in the out folder
-// for Chrome DevTools or speedscope.
+// for Chrome DevTools or speedscope. `--only` names the routes to load (ids below): one route per
+// run gives that route's own top list.
 import { spawn } from 'node:child_process';
 import { mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -24,6 +25,7 @@ const SECONDS = Number(arg('--seconds', '5'));
 const RECORDS = Number(arg('--records', '10000'));
 const outDir = resolve(arg('--out', 'bench-results/profile'));
 const buildDir = process.env.BUILD_DIR ?? 'build';
+const only = process.argv.includes('--only') ? arg('--only', '').split(',') : null;
 
 const dataDir = mkdtempSync(join(tmpdir(), 'beadline-profile-'));
 const port = await freePort();
@@ -83,9 +85,10 @@ const welder = await signInCookie(
 );
 const json = { 'content-type': 'application/json' };
 const body = JSON.stringify({ process: 'GTAW', amps: 125, thickness: { value: 3, unit: 'mm' } });
-const routes: Route[] = [
-	{ name: 'health', path: '/api/v1/health' },
+const allRoutes: Route[] = [
+	{ id: 'health', name: 'health', path: '/api/v1/health' },
 	{
+		id: 'checks-session',
 		name: 'checks (session)',
 		path: '/api/v1/checks',
 		method: 'POST' as const,
@@ -93,22 +96,33 @@ const routes: Route[] = [
 		body
 	},
 	{
+		id: 'checks-token',
 		name: 'checks (token)',
 		path: '/api/v1/checks',
 		method: 'POST' as const,
 		headers: { ...json, authorization: `Bearer ${fx.token}` },
 		body
 	},
-	{ name: 'procedures', path: '/procedures', headers: { cookie } },
+	{ id: 'procedures', name: 'procedures', path: '/procedures', headers: { cookie } },
 	{
+		id: 'records-filter',
 		name: 'records filtered',
-		path: '/records?process=GTAW&family=carbon-steel',
+		path: '/records?process=GTAW&family=carbon-steel&tmin=1%2F16&tmax=1%2F4',
 		headers: { cookie }
 	},
 	...(booth
-		? [{ name: 'booth (welder)', path: `/b/${booth.token}`, headers: { cookie: welder } }]
+		? [
+				{ id: 'booth-out', name: 'booth (signed out)', path: `/b/${booth.token}` },
+				{
+					id: 'booth-welder',
+					name: 'booth (welder)',
+					path: `/b/${booth.token}`,
+					headers: { cookie: welder }
+				}
+			]
 		: [])
 ];
+const routes = only ? allRoutes.filter((r) => only.includes(r.id!)) : allRoutes;
 for (const r of routes) {
 	const res = await load(origin, r, { seconds: SECONDS, connections: 10 });
 	console.log(

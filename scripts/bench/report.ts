@@ -28,7 +28,8 @@ export interface BenchFigures {
 	probe: LoadResult;
 	routes: LoadResult[];
 	growth: GrowthRow[];
-	mixed: {
+	/** Left out by `--only`. */
+	mixed?: {
 		requests: number;
 		non2xx: number;
 		errors: number;
@@ -81,26 +82,29 @@ export function printFigures(f: BenchFigures): void {
 			[`${((r.ratioToBare ?? 1) * 100).toFixed(1)} %`, 8]
 		]);
 
-	console.log(
-		'\nList latency as a shop’s records grow (one request at a time; median / p95 / p99 ms)'
-	);
-	line([
-		['records in shop', 16, true],
-		['/records', 20],
-		['/records?filter', 20]
-	]);
-	const t = (x: Timing) => `${x.medianMs} / ${x.p95Ms} / ${x.p99Ms}`;
-	for (const g of f.growth)
+	if (f.growth.length) {
+		console.log(
+			'\nList latency as a shop’s records grow (one request at a time; median / p95 / p99 ms)'
+		);
 		line([
-			[g.records.toLocaleString('en-US'), 16, true],
-			[t(g.list), 20],
-			[t(g.filtered), 20]
+			['records in shop', 16, true],
+			['/records', 20],
+			['/records?filter', 20]
 		]);
+		const t = (x: Timing) => `${x.medianMs} / ${x.p95Ms} / ${x.p99Ms}`;
+		for (const g of f.growth)
+			line([
+				[g.records.toLocaleString('en-US'), 16, true],
+				[t(g.list), 20],
+				[t(g.filtered), 20]
+			]);
+	}
 
 	const m = f.mixed;
-	console.log(
-		`\n${m.requests.toLocaleString('en-US')} mixed requests (every route above in turn): ${m.non2xx} non-2xx, ${m.errors} errors; RSS after ${m.rss.afterMb} MB`
-	);
+	if (m)
+		console.log(
+			`\n${m.requests.toLocaleString('en-US')} mixed requests (every route above in turn): ${m.non2xx} non-2xx, ${m.errors} errors; RSS after ${m.rss.afterMb} MB`
+		);
 	if (f.js?.length) {
 		console.log('\nJavaScript each page loads in Chromium (compressed bytes as served)');
 		line([

@@ -86,6 +86,7 @@ export const ACCESS_RULES: Record<string, Access> = {
 	'GET /procedures/sheets': roles(VIEW, [200, 400, 404]), // a batch PDF of the ids asked for
 	'GET /profile': members,
 	'GET /q/[token]': pub(), // a welder's card check: public by design
+	'GET /verify/[token]': pub(), // a data book's check against the records: public by design
 	'GET /records': roles(VIEW),
 	'GET /records/[id=id]': roles(VIEW),
 	'GET /records/[id=id]/edit': roles(AUTHOR),
@@ -147,6 +148,8 @@ export const ACCESS_RULES: Record<string, Access> = {
 	'POST /jobs/[id=id]?/repair': roles(['admin', 'engineer', 'inspector']),
 	'POST /jobs/[id=id]?/drawing': roles(AUTHOR),
 	'POST /jobs/[id=id]?/mark': roles(AUTHOR),
+	'POST /verify/[token]?/copy': pub(), // a copy of the data book checked: public by design
+	'POST /jobs/[id=id]/data-book': roles(['admin', 'engineer', 'inspector']), // streams the ZIP
 	'POST /jobs/new': roles(AUTHOR),
 	'POST /pqrs/[id=id]?/addendum': roles(AUTHOR),
 	'POST /pqrs/[id=id]?/certify': roles(CERTIFY),

@@ -90,6 +90,11 @@ const BY_AREA: [RegExp, (db: SqliteFile, shop: number) => Promise<Params | undef
 			return job && { ...job, ...report };
 		}
 	],
+	[
+		/^\/verify\b/,
+		(db, shop) =>
+			db.get('SELECT token FROM data_books WHERE shop_id = ? ORDER BY id DESC LIMIT 1', [shop])
+	],
 	// Invite tokens are stored hashed: no live one can be read back, so a made-up one is used.
 	[/^\/invite\b/, async () => ({ token: 'no-such-invite-token-0000000000000000' })]
 ];

@@ -1,5 +1,5 @@
-// Objects the demo seed does not make but some routes serve: a record photo, a PQR lab report and
-// a welder's verification link. Made through the app as an engineer would, before the params of
+// Objects the demo seed does not make but some routes serve: a record photo, a PQR lab report, a
+// welder's verification link and a job's data book (whose token the verification page takes). Made through the app as an engineer would, before the params of
 // the routes are read (demo-params.ts).
 import sharp from 'sharp';
 import { openSqlite } from '../../scripts/lib/sqlite-file';
@@ -32,21 +32,25 @@ export async function makeFixtures(origin: string, engineerCookie: string, datab
 	if (made.status !== 303) throw new Error(`fixture record: ${made.status}`);
 
 	const db = await openSqlite(databaseFile, { readonly: true });
-	const ids: { pqr?: { id: number }; welder?: { id: number } } = await (async () => {
-		try {
-			const shop = `(SELECT id FROM shops WHERE name = '${DEMO_SHOP.replace(/'/g, "''")}')`;
-			return {
-				pqr: await db.get<{ id: number }>(
-					`SELECT id FROM pqrs WHERE shop_id = ${shop} AND state = 'draft' ORDER BY id LIMIT 1`
-				),
-				welder: await db.get<{ id: number }>(
-					`SELECT id FROM welders WHERE shop_id = ${shop} ORDER BY id LIMIT 1`
-				)
-			};
-		} finally {
-			await db.close();
-		}
-	})();
+	const ids: { pqr?: { id: number }; welder?: { id: number }; job?: { id: number } } =
+		await (async () => {
+			try {
+				const shop = `(SELECT id FROM shops WHERE name = '${DEMO_SHOP.replace(/'/g, "''")}')`;
+				return {
+					pqr: await db.get<{ id: number }>(
+						`SELECT id FROM pqrs WHERE shop_id = ${shop} AND state = 'draft' ORDER BY id LIMIT 1`
+					),
+					welder: await db.get<{ id: number }>(
+						`SELECT id FROM welders WHERE shop_id = ${shop} ORDER BY id LIMIT 1`
+					),
+					job: await db.get<{ id: number }>(
+						`SELECT id FROM jobs WHERE shop_id = ${shop} ORDER BY id LIMIT 1`
+					)
+				};
+			} finally {
+				await db.close();
+			}
+		})();
 	const draft = await fetch(`${origin}/api/v1/pqrs`, {
 		method: 'POST',
 		headers: { cookie: engineerCookie, origin, 'content-type': 'application/json' },
@@ -63,4 +67,9 @@ export async function makeFixtures(origin: string, engineerCookie: string, datab
 		await fetch(`${origin}/welders/${ids.welder.id}/card`, {
 			headers: { cookie: engineerCookie }
 		}).then((r) => r.arrayBuffer());
+	if (ids.job) {
+		const book = await post(`/jobs/${ids.job.id}/data-book`, new FormData());
+		if (book.status !== 200) throw new Error(`fixture data book: ${book.status}`);
+		await book.arrayBuffer();
+	}
 }

@@ -109,7 +109,8 @@ export const ACTION_WORDS: Readonly<Record<string, ActionWords>> = {
 	'joint.marker_placed': a(
 		'Joint marked on the drawing',
 		'marked where the joint is on the drawing'
-	)
+	),
+	'data-book.compiled': a('Data book compiled', 'compiled the job’s data book for the customer')
 };
 
 /** The words for a code; one no table knows reads from its own words ("pqr.reopened" → …). */

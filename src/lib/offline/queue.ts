@@ -1,7 +1,7 @@
 // The phone's own store (IndexedDB through idb-keyval): who is signed in as far as the worker
 // knows, the continuity taps waiting to send, the notices about sent or refused taps that the
 // next page shows, and when the running worker took over from an older deployment's (for the
-// "updated, reload" prompt of OfflineAgent.svelte). Taps are filed by person and wait for that
+// "updated, reload" prompt of agent.js). Taps are filed by person and wait for that
 // person to be signed in again: a tap made offline is never dropped by a sign-out or by another
 // person using the phone.
 import { createStore, del, get, set, update, type UseStore } from 'idb-keyval';

@@ -1,4 +1,5 @@
-// Suggestions for the form's typeahead fields, straight from the reference tables.
+// Suggestions for the form's typeahead fields, straight from the reference tables. Read on the
+// server (the record pages' loads): the page gets the strings its datalists show, not the tables.
 import { BASE_METALS } from '$reference/base-metals';
 import { FILLERS } from '$reference/fillers';
 import { GAS_MIXES } from '$reference/shielding-gas';
@@ -40,3 +41,18 @@ export const GAS_SUGGESTIONS: Suggestion[] = GAS_MIXES.map((g) => ({
 	value: g.name,
 	label: g.use
 }));
+
+/** What the record form's datalists offer (RecordForm.svelte). */
+export interface RecordSuggestions {
+	fillers: Suggestion[];
+	metals: Suggestion[];
+	tungstens: Suggestion[];
+	gases: Suggestion[];
+}
+
+export const RECORD_SUGGESTIONS: RecordSuggestions = {
+	fillers: FILLER_SUGGESTIONS,
+	metals: BASE_METAL_SUGGESTIONS,
+	tungstens: TUNGSTEN_SUGGESTIONS,
+	gases: GAS_SUGGESTIONS
+};

@@ -11,6 +11,11 @@ import { linkSignInSchema, signInSchema } from '$lib/schemas/account';
 import type { Actions, PageServerLoad } from './$types';
 import { postedForm } from '$lib/server/forms/posted-form';
 
+// No JavaScript: both forms are plain posts (Auth.js answers with a redirect and sets the cookie)
+// and every message and field error comes from the server. Signed out, there is no offline agent
+// to start either.
+export const csr = false;
+
 // One message for every failure, so the form never tells whether an e-mail has an account.
 const GENERIC = 'That e-mail and password do not match an active account.';
 

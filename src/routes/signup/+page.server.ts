@@ -1,13 +1,12 @@
 import { redirect } from '@sveltejs/kit';
-import { fail, message, superValidate } from 'sveltekit-superforms';
+import { superValidate } from 'sveltekit-superforms';
 import { zod4 } from '$lib/forms/zod4';
-import { formLimiter } from '$lib/server/auth/rate-limit';
 import { createShop } from '$lib/server/people/create-shop';
 import { refuseForm } from '$lib/server/people/form-errors';
 import { START_PAGE } from '$lib/roles';
 import { signUpSchema } from '$lib/schemas/account';
 import type { Actions, PageServerLoad } from './$types';
-import { postedForm } from '$lib/server/forms/posted-form';
+import { readNewPasswordForm } from '$lib/server/forms/new-password-form';
 
 // Open to anyone by design: this is how a shop first gets onto Beadline. Rate-limited per address.
 
@@ -18,19 +17,13 @@ export const load: PageServerLoad = async ({ locals }) => {
 
 export const actions: Actions = {
 	create: async (event) => {
-		const form = await superValidate(await postedForm(event.request), zod4(signUpSchema), {
-			id: 'signup'
-		});
 		// Passwords never travel back into the page, valid or not.
-		const { password } = form.data;
-		form.data.password = '';
-		form.data.confirm = '';
-		if (!form.valid) return fail(400, { form });
-		if (await formLimiter.isLimited(event)) {
-			return message(form, 'Too many attempts from here. Wait a minute and try again.', {
-				status: 429
-			});
-		}
+		const { form, password, refused } = await readNewPasswordForm(
+			event,
+			zod4(signUpSchema),
+			'signup'
+		);
+		if (refused) return refused;
 		try {
 			await createShop({ ...form.data, password }, event);
 		} catch (e) {

@@ -19,6 +19,14 @@ export class ApiFailure extends Error {
 	}
 }
 
+/** The configured origin, parsed once per distinct value rather than on every API call. */
+let parsedOrigin: { from: string; origin: string } | null = null;
+function appOrigin(): string {
+	const from = config.origin;
+	if (parsedOrigin?.from !== from) parsedOrigin = { from, origin: new URL(from).origin };
+	return parsedOrigin.origin;
+}
+
 /**
  * The caller of an API endpoint: a bearer token, or the session cookie. A cookie alone can be
  * ridden by another site, so a data-changing call on a cookie must be same-origin JSON.
@@ -35,7 +43,7 @@ export async function apiMember(event: RequestEvent, ...roles: Role[]): Promise<
 		if (!user) fail(401, { message: 'Sign in or send an API token (Authorization: Bearer …).' });
 		if (event.request.method !== 'GET' && event.request.method !== 'HEAD') {
 			const origin = event.request.headers.get('origin');
-			if (origin && origin !== new URL(config.origin).origin && origin !== event.url.origin) {
+			if (origin && origin !== appOrigin() && origin !== event.url.origin) {
 				fail(403, { message: 'Cross-site requests are refused.' });
 			}
 		}

@@ -80,3 +80,5 @@ export {
 export { ContinuityTap } from './continuity-tap';
 
 export { Job, JobJoint, JointInspection, JointRepair, WeldLog, WeldOverride } from './jobs';
+
+export { DataBook } from './data-book';

@@ -70,12 +70,24 @@ export async function revisionContent(
 		rejectOnEmpty: true,
 		transaction: t
 	});
-	const procedure = await Procedure.findByPk(revision.procedureId, {
-		rejectOnEmpty: true,
+	return contentOf(revision, await pqrLinksOf(revision, t), t);
+}
+
+const pqrLinksOf = (revision: ProcedureRevision, t?: Transaction) =>
+	RevisionPqr.findAll({
+		where: { revisionId: revision.id, shopId: revision.shopId },
 		transaction: t
 	});
-	const [pqrLinks, recordLinks] = await Promise.all([
-		RevisionPqr.findAll({ where: { revisionId, shopId: revision.shopId }, transaction: t }),
+
+/** The content of a revision already read, with its PQR links (read with it, in the same shop). */
+async function contentOf(
+	revision: ProcedureRevision,
+	pqrLinks: RevisionPqr[],
+	t?: Transaction
+): Promise<RevisionContent> {
+	const revisionId = revision.id;
+	const [procedure, recordLinks] = await Promise.all([
+		Procedure.findByPk(revision.procedureId, { rejectOnEmpty: true, transaction: t }),
 		RevisionRecord.findAll({ where: { revisionId, shopId: revision.shopId }, transaction: t })
 	]);
 	const pqrIds = pqrLinks.map((l) => l.pqrId).sort((a, b) => a - b);
@@ -137,10 +149,13 @@ export interface Integrity {
 
 /** Recomputes the digest and every seal of a revision's sign-offs against what they recorded. */
 export async function checkIntegrity(revisionId: number, t?: Transaction): Promise<Integrity> {
-	const [content, signOffs] = await Promise.all([
-		revisionContent(revisionId, t),
+	// The revision and its PQR links are read once and serve both the digest and the checks below.
+	const [revision, signOffs] = await Promise.all([
+		ProcedureRevision.findByPk(revisionId, { rejectOnEmpty: true, transaction: t }),
 		SignOff.findAll({ where: { revisionId }, order: [['id', 'ASC']], transaction: t })
 	]);
+	const pqrLinks = await pqrLinksOf(revision, t);
+	const content = await contentOf(revision, pqrLinks, t);
 	const problems: string[] = [];
 	for (const s of signOffs)
 		if (sealOf(s) !== s.seal)
@@ -148,14 +163,15 @@ export async function checkIntegrity(revisionId: number, t?: Transaction): Promi
 	const approval = signOffs.filter((s) => s.meaning === 'approved').at(-1) ?? null;
 	if (approval && approval.digest !== content.digest)
 		problems.push('The revision as stored now differs from what was signed.');
-	const revision = await ProcedureRevision.findByPk(revisionId, { transaction: t });
-	if (!approval && revision && ['approved', 'superseded', 'withdrawn'].includes(revision.state))
+	if (!approval && ['approved', 'superseded', 'withdrawn'].includes(revision.state))
 		problems.push('The revision is marked signed but carries no approving signature.');
 	// The PQRs a signed revision leans on must still be what their certifiers signed.
 	if (approval) {
-		const links = await RevisionPqr.findAll({ where: { revisionId }, transaction: t });
-		const pqrs = links.length
-			? await Pqr.findAll({ where: { id: { [Op.in]: links.map((l) => l.pqrId) } }, transaction: t })
+		const pqrs = pqrLinks.length
+			? await Pqr.findAll({
+					where: { id: { [Op.in]: pqrLinks.map((l) => l.pqrId) } },
+					transaction: t
+				})
 			: [];
 		for (const p of pqrs)
 			if (p.certifiedDigest && (await pqrDigest(p, t)) !== p.certifiedDigest)

@@ -21,7 +21,8 @@ function cached<T>(load: (shopId: number) => Promise<T>) {
 	};
 }
 
-async function recordsVersion(shopId: number): Promise<string> {
+/** The shop's records version: migration 0009's triggers bump it on every write to them. */
+export async function recordsVersion(shopId: number): Promise<string> {
 	const [row] = await sequelize.query<{ version: number }>(
 		'SELECT version FROM settings_record_versions WHERE shop_id = ?',
 		{ replacements: [shopId], type: QueryTypes.SELECT }

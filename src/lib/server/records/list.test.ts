@@ -180,3 +180,21 @@ describe('records list filters (own shop only)', () => {
 		expect(past.page).toBe(2);
 	});
 });
+
+describe('records list counts (cached under the records version)', () => {
+	it('counts a new record and an edited one on the very next list', async () => {
+		const shop = await newShop('List Count Shop');
+		const cara = await addMember(shop.shopId, 'engineer');
+		const total = async (q: string) =>
+			(await svc.listRecords(cara, readFilters(new URLSearchParams(q)))).total;
+		const a = await svc.createRecord(cara, form(FRAME));
+		expect(await total('process=GTAW')).toBe(1);
+		expect(await total('process=GTAW')).toBe(1); // the same list again, from the cache
+		await svc.createRecord(cara, form(RAIL));
+		expect(await total('process=GTAW')).toBe(2);
+		await svc.updateRecord(cara, a.id, form({ ...FRAME, process: 'SMAW' }));
+		expect(await total('process=GTAW')).toBe(1);
+		expect(await total('process=SMAW')).toBe(1);
+		expect(await total('')).toBe(2);
+	});
+});

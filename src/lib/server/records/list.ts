@@ -7,7 +7,7 @@ import type { SessionUser } from '../auth/session-user';
 import { sequelize } from '../db/sequelize';
 import { unindexedTerm } from '../db/dialect';
 import { SettingsRecord } from '../models';
-import { authorNames } from './choices';
+import { authorNames, recordsVersion } from './choices';
 import { searchTerms } from './search';
 
 export const PAGE_SIZE = 25;
@@ -121,13 +121,47 @@ export function walkInOrder(
 	return (rowsToReach * shopTotal) / matches < matches;
 }
 
+/** The filter fields a count depends on (not the page or the sort). */
+const COUNTED = [
+	'q',
+	'process',
+	'family',
+	'tmin',
+	'tmax',
+	'filler',
+	'position',
+	'outcome',
+	'author',
+	'from',
+	'to'
+] as const satisfies readonly (keyof RecordFilterInput)[];
+
+const MAX_COUNTS = 2_000;
+const counts = new Map<string, number>();
+
+/**
+ * A count of the shop's records, cached under the shop's records version (read from the database
+ * on each list, so a write from any process changes the key) and the filters. On 100k records a
+ * filtered COUNT was the list's costliest query, and lists are read far more often than written.
+ */
+async function countOf(key: string, where: WhereOptions<SettingsRecord>): Promise<number> {
+	const hit = counts.get(key);
+	if (hit !== undefined) return hit;
+	const n = await SettingsRecord.count({ where });
+	if (counts.size >= MAX_COUNTS) counts.delete(counts.keys().next().value!);
+	counts.set(key, n);
+	return n;
+}
+
 export async function listRecords(
 	actor: SessionUser,
 	f: RecordFilterInput,
 	opts: { strategy?: 'walk' | 'sort' } = {}
 ) {
 	const { where, problems } = resolveFilters(f, actor.shopId, actor.unitSystem);
-	const total = await SettingsRecord.count({ where });
+	const version = `${actor.shopId}|${await recordsVersion(actor.shopId)}`;
+	const filterKey = JSON.stringify([actor.unitSystem, ...COUNTED.map((k) => f[k] ?? null)]);
+	const total = await countOf(`${version}|${filterKey}`, where);
 	const pages = Math.max(1, Math.ceil(total / PAGE_SIZE));
 	const page = Math.min(f.page, pages);
 	const walk =
@@ -137,7 +171,7 @@ export async function listRecords(
 			walkInOrder(
 				f.sort,
 				total,
-				await SettingsRecord.count({ where: { shopId: actor.shopId } }),
+				await countOf(`${version}|all`, { shopId: actor.shopId }),
 				page * PAGE_SIZE
 			));
 	const rows = await SettingsRecord.findAll({

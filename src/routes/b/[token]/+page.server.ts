@@ -52,6 +52,8 @@ export const load: PageServerLoad = async (event) => {
 			current: status.current && { rev: status.current.rev, path: status.current.path }
 		},
 		checkedAt: new Date().toISOString(),
+		// Not even the shell's offline agent (AppShell.svelte): the booth view loads no script.
+		offlineAgent: false,
 		signedIn: !!user,
 		otherShop: !!user && !member,
 		// The tap form carries an id of its own: a resent form (or the phone's queue) counts once.

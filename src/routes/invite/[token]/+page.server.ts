@@ -1,13 +1,12 @@
 import { error, redirect, type RequestEvent } from '@sveltejs/kit';
-import { fail, message, superValidate } from 'sveltekit-superforms';
+import { superValidate } from 'sveltekit-superforms';
 import { zod4 } from '$lib/forms/zod4';
-import { formLimiter } from '$lib/server/auth/rate-limit';
 import { InviteGoneError } from '$lib/server/people/errors';
 import { refuseForm } from '$lib/server/people/form-errors';
 import { acceptInvite, findOpenInvite } from '$lib/server/people/invites';
 import { acceptInviteSchema } from '$lib/schemas/account';
 import type { Actions, PageServerLoad } from './$types';
-import { postedForm } from '$lib/server/forms/posted-form';
+import { readNewPasswordForm } from '$lib/server/forms/new-password-form';
 
 // Public by design: the person has no account yet; the unguessable token is the permission.
 // Every failure reads the same, so the page tells nothing about any other invite.
@@ -37,18 +36,12 @@ export const load: PageServerLoad = async (event) => {
 
 export const actions: Actions = {
 	accept: async (event) => {
-		const form = await superValidate(await postedForm(event.request), zod4(acceptInviteSchema), {
-			id: 'accept'
-		});
-		const { password } = form.data;
-		form.data.password = '';
-		form.data.confirm = '';
-		if (!form.valid) return fail(400, { form });
-		if (await formLimiter.isLimited(event)) {
-			return message(form, 'Too many attempts from here. Wait a minute and try again.', {
-				status: 429
-			});
-		}
+		const { form, password, refused } = await readNewPasswordForm(
+			event,
+			zod4(acceptInviteSchema),
+			'accept'
+		);
+		if (refused) return refused;
 		let email: string;
 		try {
 			({ email } = await acceptInvite(event.params.token, password, event));

@@ -20,6 +20,8 @@ import {
 	REPAIR_ROLES,
 	WELD_ROLES
 } from '$lib/server/fabrication';
+import { DATA_BOOK_ROLES } from '$lib/server/fabrication/data-book/access';
+import { dataBooksOf } from '$lib/server/fabrication/data-book/list';
 import { postedForm } from '$lib/server/forms/posted-form';
 import { Procedure, Welder } from '$lib/server/models';
 import { RefusedError } from '$lib/server/people/errors';
@@ -55,6 +57,8 @@ export const load: PageServerLoad = async (event) => {
 		canInspect: INSPECT_ROLES.includes(user.role),
 		canRepair: REPAIR_ROLES.includes(user.role),
 		counts: jobCounts(job.joints.map((j) => j.history)),
+		dataBooks: await dataBooksOf(user.shopId, job.id),
+		canCompileBook: DATA_BOOK_ROLES.includes(user.role),
 		welders: REPAIR_ROLES.includes(user.role)
 			? (
 					await Welder.findAll({

@@ -1,15 +1,13 @@
-import { redirect } from '@sveltejs/kit';
-import { fail, superValidate } from 'sveltekit-superforms';
+import { superValidate } from 'sveltekit-superforms';
 import { zod4 } from '$lib/forms/zod4';
 import { requireRole } from '$lib/server/auth/guards';
 import { AUTHOR_ROLES, nextNumber } from '$lib/server/procedures';
 import { createPqr } from '$lib/server/pqrs';
-import { refuse } from '$lib/server/procedures/form-errors';
 import { pqrFormSchema } from '$lib/schemas/pqr';
 import { pqrCodeFor } from '$lib/procedures/default-code';
 import { shopDefaultCode } from '$lib/server/people/shop-settings';
 import type { Actions, PageServerLoad } from './$types';
-import { postedForm } from '$lib/server/forms/posted-form';
+import { saveThenShow } from '$lib/server/procedures/save-form';
 
 const schema = zod4(pqrFormSchema);
 
@@ -25,14 +23,9 @@ export const load: PageServerLoad = async (event) => {
 export const actions: Actions = {
 	save: async (event) => {
 		const user = requireRole(event, ...AUTHOR_ROLES);
-		const form = await superValidate(await postedForm(event.request), schema);
-		if (!form.valid) return fail(400, { form });
-		let id: number;
-		try {
-			({ id } = await createPqr(user, form.data, event));
-		} catch (e) {
-			return refuse(form, e);
-		}
-		redirect(303, `/pqrs/${id}?done=saved`);
+		return saveThenShow(event, schema, async (data) => {
+			const { id } = await createPqr(user, data, event);
+			return `/pqrs/${id}?done=saved`;
+		});
 	}
 };

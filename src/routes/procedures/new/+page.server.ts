@@ -1,16 +1,14 @@
-import { redirect } from '@sveltejs/kit';
-import { fail, superValidate } from 'sveltekit-superforms';
+import { superValidate } from 'sveltekit-superforms';
 import { zod4 } from '$lib/forms/zod4';
 import { requireRole } from '$lib/server/auth/guards';
 import { SettingsRecord } from '$lib/server/models';
 import { shopDefaultCode } from '$lib/server/people/shop-settings';
 import { procedureCodeFor } from '$lib/procedures/default-code';
 import { AUTHOR_ROLES, createProcedure, nextNumber } from '$lib/server/procedures';
-import { refuse } from '$lib/server/procedures/form-errors';
 import { newProcedureSchema } from '$lib/schemas/procedure';
 import { PROCESSES } from '$lib/records/options';
 import type { Actions, PageServerLoad } from './$types';
-import { postedForm } from '$lib/server/forms/posted-form';
+import { saveThenShow } from '$lib/server/procedures/save-form';
 
 const schema = zod4(newProcedureSchema);
 
@@ -66,14 +64,9 @@ export const load: PageServerLoad = async (event) => {
 export const actions: Actions = {
 	default: async (event) => {
 		const user = requireRole(event, ...AUTHOR_ROLES);
-		const form = await superValidate(await postedForm(event.request), schema);
-		if (!form.valid) return fail(400, { form });
-		let id: number;
-		try {
-			({ id } = await createProcedure(user, form.data, event));
-		} catch (e) {
-			return refuse(form, e);
-		}
-		redirect(303, `/procedures/${id}/revisions/1/edit?created=1`);
+		return saveThenShow(event, schema, async (data) => {
+			const { id } = await createProcedure(user, data, event);
+			return `/procedures/${id}/revisions/1/edit?created=1`;
+		});
 	}
 };

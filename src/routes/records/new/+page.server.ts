@@ -5,6 +5,7 @@ import { requireRole } from '$lib/server/auth/guards';
 import { createRecord, CREATE_ROLES, photosFrom } from '$lib/server/records';
 import { refuseRecordForm, type RecordMessage } from '$lib/server/records/form-errors';
 import { settingsRecordSchema } from '$lib/schemas/settings-record';
+import { RECORD_SUGGESTIONS } from '$lib/records/typeahead';
 import type { Actions, PageServerLoad } from './$types';
 import { postedForm } from '$lib/server/forms/posted-form';
 
@@ -15,7 +16,7 @@ export const load: PageServerLoad = async (event) => {
 		zod4(settingsRecordSchema),
 		{ id: 'record', errors: false }
 	);
-	return { form, system: user.unitSystem };
+	return { form, system: user.unitSystem, suggestions: RECORD_SUGGESTIONS };
 };
 
 export const actions: Actions = {

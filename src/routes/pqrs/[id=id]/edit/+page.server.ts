@@ -1,15 +1,14 @@
-import { redirect } from '@sveltejs/kit';
-import { fail, superValidate } from 'sveltekit-superforms';
+import { superValidate } from 'sveltekit-superforms';
 import { zod4 } from '$lib/forms/zod4';
 import { requireRole } from '$lib/server/auth/guards';
 import { AUTHOR_ROLES } from '$lib/server/procedures';
 import { CERTIFIED_MESSAGE, findPqr, readPqr, updatePqr } from '$lib/server/pqrs';
-import { refuse, rethrowAsHttp } from '$lib/server/procedures/form-errors';
+import { rethrowAsHttp } from '$lib/server/procedures/form-errors';
 import { pqrToForm } from '$lib/procedures/pqr-values';
 import { pqrFormSchema } from '$lib/schemas/pqr';
 import { asPqrCode } from '$lib/procedures/default-code';
 import type { Actions, PageServerLoad } from './$types';
-import { postedForm } from '$lib/server/forms/posted-form';
+import { saveThenShow } from '$lib/server/procedures/save-form';
 
 const schema = zod4(pqrFormSchema);
 
@@ -38,13 +37,9 @@ export const actions: Actions = {
 	save: async (event) => {
 		const user = requireRole(event, ...AUTHOR_ROLES);
 		const id = Number(event.params.id);
-		const form = await superValidate(await postedForm(event.request), schema);
-		if (!form.valid) return fail(400, { form });
-		try {
-			await updatePqr(user, id, form.data, event);
-		} catch (e) {
-			return refuse(form, e);
-		}
-		redirect(303, `/pqrs/${id}?done=saved`);
+		return saveThenShow(event, schema, async (data) => {
+			await updatePqr(user, id, data, event);
+			return `/pqrs/${id}?done=saved`;
+		});
 	}
 };

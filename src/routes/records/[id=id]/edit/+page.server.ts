@@ -17,6 +17,7 @@ import {
 } from '$lib/server/records/form-errors';
 import { recordTextOf } from '$lib/records/display';
 import { settingsRecordSchema, type SettingsRecordForm } from '$lib/schemas/settings-record';
+import { RECORD_SUGGESTIONS } from '$lib/records/typeahead';
 import type { Actions, PageServerLoad } from './$types';
 import { postedForm } from '$lib/server/forms/posted-form';
 
@@ -35,7 +36,7 @@ export const load: PageServerLoad = async (event) => {
 		id: 'record',
 		errors: false
 	});
-	return { form, record, system: user.unitSystem };
+	return { form, record, system: user.unitSystem, suggestions: RECORD_SUGGESTIONS };
 };
 
 export const actions: Actions = {

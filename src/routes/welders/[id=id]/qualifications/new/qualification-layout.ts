@@ -10,6 +10,9 @@ import {
 } from '$lib/schemas/welder';
 
 const plain = (values: readonly string[]): Choice[] => values.map((v) => ({ value: v, label: v }));
+/** Choices from value → words, in the order written. */
+const labelled = (words: Record<string, string>): Choice[] =>
+	Object.entries(words).map(([value, label]) => ({ value, label }));
 const positions = (values: Values) =>
 	plain(TEST_POSITIONS_BY_FORM[values.couponType === 'pipe' ? 'pipe' : 'plate']);
 const row = (grid: string, entries: Section['entries']): Section => ({
@@ -29,10 +32,7 @@ export const QUALIFICATION_ROWS: readonly Section[] = [
 		{
 			name: 'couponType',
 			label: 'Coupon',
-			choices: [
-				{ value: 'plate', label: 'Plate' },
-				{ value: 'pipe', label: 'Pipe' }
-			]
+			choices: labelled({ plate: 'Plate', pipe: 'Pipe' })
 		},
 		{
 			name: 'couponDiameter',
@@ -86,10 +86,7 @@ export const QUALIFICATION_ROWS: readonly Section[] = [
 			name: 'backing',
 			label: 'Backing',
 			empty: '—',
-			choices: [
-				{ value: 'with', label: 'With backing' },
-				{ value: 'without', label: 'Without backing' }
-			]
+			choices: labelled({ with: 'With backing', without: 'Without backing' })
 		},
 		{
 			name: 'currentType',

@@ -1,5 +1,4 @@
-import { redirect } from '@sveltejs/kit';
-import { fail, superValidate } from 'sveltekit-superforms';
+import { superValidate } from 'sveltekit-superforms';
 import { zod4 } from '$lib/forms/zod4';
 import { requireRole } from '$lib/server/auth/guards';
 import {
@@ -12,11 +11,11 @@ import {
 	updateDraft
 } from '$lib/server/procedures';
 import { listPqrs } from '$lib/server/pqrs';
-import { refuse, rethrowAsHttp } from '$lib/server/procedures/form-errors';
+import { rethrowAsHttp } from '$lib/server/procedures/form-errors';
 import { variablesToForm } from '$lib/procedures/variables';
 import { revisionFormSchema } from '$lib/schemas/procedure';
 import type { Actions, PageServerLoad } from './$types';
-import { postedForm } from '$lib/server/forms/posted-form';
+import { saveThenShow } from '$lib/server/procedures/save-form';
 
 const schema = zod4(revisionFormSchema);
 
@@ -55,13 +54,9 @@ export const actions: Actions = {
 		const user = requireRole(event, ...AUTHOR_ROLES);
 		const id = Number(event.params.id);
 		const rev = Number(event.params.rev);
-		const form = await superValidate(await postedForm(event.request), schema);
-		if (!form.valid) return fail(400, { form });
-		try {
-			await updateDraft(user, id, rev, form.data, event);
-		} catch (e) {
-			return refuse(form, e);
-		}
-		redirect(303, `/procedures/${id}/revisions/${rev}?done=saved`);
+		return saveThenShow(event, schema, async (data) => {
+			await updateDraft(user, id, rev, data, event);
+			return `/procedures/${id}/revisions/${rev}?done=saved`;
+		});
 	}
 };
