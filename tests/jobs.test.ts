@@ -1,6 +1,8 @@
 // A job from opening to its joint list: the engineer opens it, pastes a list with mistakes
-// (every line named, nothing added), fixes it and adds it whole; a welder can read it.
+// (every line named, nothing added), fixes it and adds it whole, attaches the drawing and marks
+// joints on it; a welder can read it.
 import { expect, test } from '@playwright/test';
+import sharp from 'sharp';
 import { engineer, inspector, signIn, welder } from './support/people';
 import { readDataBook } from './support/data-book';
 import { uniqueNumber } from './support/procedures';
@@ -44,6 +46,50 @@ test('an engineer opens a job and lists its joints from a pasted list', async ({
 	await add.getByLabel('Procedure number').fill('WPS-002');
 	await add.getByRole('button', { name: 'Add the joint' }).click();
 	await expect(page.getByTestId('joint-row')).toHaveCount(3);
+
+	// The drawing: a PDF is refused for marking only in words; an image is marked by a click on
+	// it, and by keys (the joint picked, its position typed and Enter).
+	await page.getByLabel(/Attach the drawing/).setInputFiles({
+		name: 'frame.txt',
+		mimeType: 'image/png',
+		buffer: Buffer.from('not an image')
+	});
+	await page.getByRole('button', { name: 'Upload the drawing' }).click();
+	await expect(page.getByTestId('drawing-form')).toContainText('is not a PDF or JPEG or PNG file');
+	const png = await sharp({
+		create: { width: 400, height: 200, channels: 3, background: '#ffffff' }
+	})
+		.png()
+		.toBuffer();
+	await page.getByLabel(/Attach the drawing/).setInputFiles({
+		name: 'frame.png',
+		mimeType: 'image/png',
+		buffer: png
+	});
+	await page.getByRole('button', { name: 'Upload the drawing' }).click();
+	await expect(page.getByText('Drawing attached.')).toBeVisible();
+	const drawing = page.getByTestId('drawing');
+	await expect(drawing.locator('img')).toBeVisible();
+	const marker = page.getByTestId('marker-form');
+	await marker.getByLabel('Joint to mark').selectOption({ label: 'J1 (not marked)' });
+	const box = (await drawing.boundingBox())!;
+	await drawing.click({ position: { x: box.width / 4, y: box.height / 2 } });
+	await expect(page.getByText('Marker placed.')).toBeVisible();
+	const j1 = page.locator('[data-testid="marker"][data-mark="J1"]');
+	await expect(j1).toHaveAttribute('title', 'J1: Not welded');
+	await marker.getByLabel('Joint to mark').selectOption({ label: 'J2 (not marked)' });
+	await marker.getByLabel(/Across/).fill('0.75');
+	await marker.getByLabel(/Down/).fill('0.5');
+	await marker.getByLabel(/Down/).press('ArrowUp'); // 0.51: arrow keys move it too
+	await marker.getByLabel(/Down/).press('Enter');
+	await expect(page.locator('[data-testid="marker"][data-mark="J2"]')).toBeVisible();
+	await expect(page.getByTestId('legend')).toContainText('Rejected: repair');
+	await expect(page.getByTestId('drawing-panel')).toContainText('2 of 3 joints marked.');
+	await marker.getByLabel('Joint to mark').selectOption({ label: 'J3 (not marked)' });
+	await marker.getByLabel(/Across/).fill('1.5');
+	await marker.getByLabel(/Down/).fill('0.5');
+	await marker.getByRole('button', { name: 'Place the marker' }).click();
+	await expect(marker).toContainText('Give a number from 0 to 1');
 
 	const w = await (await browser.newContext()).newPage();
 	await signIn(w, welder);
@@ -120,8 +166,12 @@ test('an inspector rejects a joint, a repair is opened, welded and accepted; the
 	await expect(page).toHaveURL(/\/jobs\/\d+$/); // the job page, not the list still
 	const jobPath = new URL(page.url()).pathname;
 	const form = page.getByTestId('inspection-form');
-	const inspect = async (result: 'Accept' | 'Reject', note: string) => {
+	const inspect = async (result: 'Accept' | 'Reject', note: string, report?: Buffer) => {
 		await form.getByLabel('Joint').selectOption({ label: 'W4' });
+		if (report)
+			await form
+				.getByLabel(/^Report/)
+				.setInputFiles({ name: 'W4-rt.pdf', mimeType: 'application/pdf', buffer: report });
 		await form.getByLabel('Method').selectOption('RT');
 		await form.getByLabel('Result').selectOption({ label: result });
 		await form.getByLabel('Note').fill(note);
@@ -129,10 +179,23 @@ test('an inspector rejects a joint, a repair is opened, welded and accepted; the
 		await form.getByRole('button', { name: 'Sign the inspection' }).click();
 		await expect(form).toContainText('Inspection signed.');
 	};
-	await inspect('Reject', 'Lack of fusion at the root, 20 mm.');
+	const film = Buffer.from('%PDF-1.4\n1 0 obj<<>>endobj\ntrailer<<>>\n%%EOF\n');
+	await inspect('Reject', 'Lack of fusion at the root, 20 mm.', film);
 	const w4 = page.locator('[data-testid="joint-row"][data-mark="W4"]');
 	await expect(w4.getByTestId('joint-status')).toHaveAttribute('data-status', 'rejected');
 	await expect(w4.getByTestId('joint-steps')).toContainText('RT 100 %: rejected');
+	// The report is kept with the signed inspection and downloads whole, as a PDF.
+	const link = w4.getByTestId('report-link').last();
+	await expect(link).toContainText('W4-rt.pdf');
+	const served = await page.request.get((await link.getAttribute('href'))!);
+	expect(served.status()).toBe(200);
+	expect(served.headers()['content-type']).toBe('application/pdf');
+	expect(Buffer.from(await served.body()).equals(film)).toBe(true);
+	// On the drawing, the rejected joint reads so without its colour.
+	await expect(page.locator('[data-testid="marker"][data-mark="W4"]')).toHaveAttribute(
+		'title',
+		'W4: Rejected: repair'
+	);
 
 	const repair = page.getByTestId('repair-form');
 	await repair.getByLabel('Rejected joint').selectOption({ label: 'W4' });

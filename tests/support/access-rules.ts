@@ -63,6 +63,8 @@ export const ACCESS_RULES: Record<string, Access> = {
 	'GET /jobs': members, // the welder opens a job to log a weld
 	'GET /jobs/[id=id]/weld-log.csv': members,
 	'GET /jobs/[id=id]': members,
+	'GET /jobs/[id=id]/drawing': members,
+	'GET /jobs/[id=id]/inspections/[inspection=id]/report': members,
 	'GET /jobs/new': roles(AUTHOR),
 	'GET /invite/[token]': pub([404, 410]), // no live invite token can be read back (hashed)
 	'GET /pqrs': roles(VIEW),
@@ -144,6 +146,8 @@ export const ACCESS_RULES: Record<string, Access> = {
 	'POST /jobs/[id=id]?/override': roles(REVIEW), // an inspector's signed override
 	'POST /jobs/[id=id]?/inspect': roles(REVIEW),
 	'POST /jobs/[id=id]?/repair': roles(['admin', 'engineer', 'inspector']),
+	'POST /jobs/[id=id]?/drawing': roles(AUTHOR),
+	'POST /jobs/[id=id]?/mark': roles(AUTHOR),
 	'POST /verify/[token]?/copy': pub(), // a copy of the data book checked: public by design
 	'POST /jobs/[id=id]/data-book': roles(['admin', 'engineer', 'inspector']), // streams the ZIP
 	'POST /jobs/new': roles(AUTHOR),

@@ -75,12 +75,20 @@ const BY_AREA: [RegExp, (db: SqliteFile, shop: number) => Promise<Params | undef
 	],
 	[
 		/^\/(api\/v1\/)?jobs\b/,
-		(db, shop) =>
-			db.get(
+		// The demo job has a drawing and W1's inspection a report (seed-jobs.ts).
+		async (db, shop) => {
+			const job = await db.get<{ id: number; joint: number }>(
 				`SELECT j.id, x.id AS joint FROM jobs j LEFT JOIN job_joints x ON x.job_id = j.id
-				 WHERE j.shop_id = ? ORDER BY j.id, x.id LIMIT 1`,
+				 WHERE j.shop_id = ? ORDER BY (j.drawing_key IS NOT NULL) DESC, j.id, x.id LIMIT 1`,
 				[shop]
-			)
+			);
+			const report = await db.get<{ inspection: number }>(
+				`SELECT i.id AS inspection FROM joint_inspections i JOIN job_joints x ON x.id = i.joint_id
+				 WHERE x.job_id = ? AND i.report_key IS NOT NULL LIMIT 1`,
+				[job?.id ?? 0]
+			);
+			return job && { ...job, ...report };
+		}
 	],
 	[
 		/^\/verify\b/,

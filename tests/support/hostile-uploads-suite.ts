@@ -1,6 +1,7 @@
 // The hostile-upload checks, defined once and run against any server: the shared end-to-end
 // server (local folder, tests/hostile-uploads.test.ts) and an own server with STORAGE=s3
-// (tests/hostile-uploads-s3.test.ts). Each file is refused (400 with a message, nothing stored)
+// (tests/hostile-uploads-s3.test.ts): record photos, PQR lab reports and job drawings (the same
+// storage path as inspection reports). Each file is refused (400 with a message, nothing stored)
 // or neutralised: stored under a random name, re-encoded (images: trailing script and metadata
 // gone), and served with its real type, nosniff, a Content-Disposition of our own and no caching.
 import { existsSync } from 'node:fs';
@@ -162,6 +163,63 @@ export function hostileUploadTests(target: UploadTarget): void {
 		await storageKeysAreOurs();
 		console.log(
 			`[uploads] PQR reports, ${results.length} hostile files:\n  ${results.join('\n  ')}`
+		);
+	});
+
+	test('job drawings: hostile files are refused or neutralised', async () => {
+		test.setTimeout(120_000);
+		const cookie = await cookieOf(engineer);
+		const opened = new FormData();
+		for (const [k, v] of Object.entries({
+			number: `JOB-HOSTILE-${Date.now()}`,
+			customer: 'Invented Hostile Co',
+			part: 'Upload frame',
+			code: 'aws-d1.1'
+		}))
+			opened.set(k, v);
+		const made = await postForm('/jobs/new', cookie, opened);
+		expect(made.status).toBe(303);
+		const jobPath = new URL(made.headers.get('location')!, origin()).pathname;
+		const jobId = Number(jobPath.split('/').pop());
+		const keyOf = () =>
+			withE2eDatabase((db) =>
+				db.get<{ k: string | null }>('SELECT drawing_key AS k FROM jobs WHERE id = ?', [jobId])
+			);
+		const results: string[] = [];
+		// A drawing may be a PDF or an image up to 20 MB: the PDF where a photo goes and the photo
+		// over the photos' 10 MB are taken here (the "PNG where a PDF goes" is a pixel flood).
+		const takenHere = /^(PDF where a photo goes|oversize JPEG)/;
+		const corpus = [...(await photoCorpus()), ...reportCorpus()] as HostileFile[];
+		for (const f of corpus.map((c) =>
+			takenHere.test(c.label) ? { ...c, expect: 'neutralised' as const } : c
+		)) {
+			const before = (await keyOf())?.k ?? null;
+			const form = new FormData();
+			form.append('drawing', new Blob([new Uint8Array(f.bytes)], { type: f.type }), f.name);
+			const res = await postForm(`${jobPath}?/drawing`, cookie, form);
+			const after = (await keyOf())?.k ?? null;
+			if (f.expect === 'refused') {
+				expect(res.status, f.label).toBe(400);
+				expect(after, `${f.label}: the drawing is unchanged`).toBe(before);
+			} else {
+				expect(res.status, f.label).toBe(200);
+				expect(after, f.label).not.toBe(before);
+				const served = await fetch(`${origin()}${jobPath}/drawing`, { headers: { cookie } });
+				expect(served.status, f.label).toBe(200);
+				expectSafeHeaders(served, /^(image\/(jpeg|png)|application\/pdf)$/);
+				expect(served.headers.get('content-security-policy')).toContain("default-src 'none'");
+				expect(served.headers.get('content-disposition')).not.toMatch(/[\r\n]|\.\.\//);
+				const bytes = Buffer.from(await served.arrayBuffer());
+				if (served.headers.get('content-type') !== 'application/pdf') {
+					expect(bytes.includes(Buffer.from('beadline-xss')), f.label).toBe(false);
+					expect(bytes.includes(Buffer.from('beadline-exif-secret')), f.label).toBe(false);
+				}
+			}
+			results.push(`${f.label}: ${f.expect}`);
+		}
+		await storageKeysAreOurs();
+		console.log(
+			`[uploads] job drawings, ${results.length} hostile files:\n  ${results.join('\n  ')}`
 		);
 	});
 }

@@ -100,6 +100,16 @@ export const ACTION_WORDS: Readonly<Record<string, ActionWords>> = {
 	'weld.override_signed': a('Override signed', 'signed an override for a refused weld log'),
 	'joint.inspected': a('Joint inspected', 'inspected the joint and signed the result'),
 	'joint.repair_opened': a('Repair opened', 'opened a repair of the rejected joint'),
+	'joint.report_downloaded': a('Inspection report downloaded', 'downloaded an inspection report'),
+	'joint.report_tamper_detected': a(
+		'Inspection report altered',
+		'asked for an inspection report whose stored bytes no longer match their digest'
+	),
+	'job.drawing_attached': a('Drawing attached', 'attached the drawing to the job'),
+	'joint.marker_placed': a(
+		'Joint marked on the drawing',
+		'marked where the joint is on the drawing'
+	),
 	'data-book.compiled': a('Data book compiled', 'compiled the job’s data book for the customer')
 };
 

@@ -42,6 +42,8 @@ export interface InspectionView {
 	role: string;
 	signedAt: string;
 	digest: string;
+	/** The NDE report attached when it was signed, downloaded through the job. */
+	report: { name: string } | null;
 }
 
 export interface RepairView {
@@ -85,4 +87,6 @@ export interface JointView {
 	/** 0 while first welded; the latest repair's round after a rejection. */
 	round: number;
 	history: JointHistory;
+	/** Where the joint is marked on the job's drawing: fractions (0–1) of its width and height. */
+	marker: { x: number; y: number } | null;
 }

@@ -131,3 +131,39 @@ export const repairSchema = z.object({
 	note: text(500)
 });
 export type RepairForm = z.infer<typeof repairSchema>;
+
+/** A coordinate on the drawing: a fraction of its width or height, 0 (left/top) to 1. */
+const fraction = z
+	.union([z.number(), z.string()])
+	.transform((v, ctx) => {
+		const s = String(v).trim().replace(',', '.');
+		if (s === '') return null;
+		const n = Number(s);
+		if (!Number.isFinite(n) || n < 0 || n > 1) {
+			ctx.addIssue({ code: 'custom', message: 'Give a number from 0 to 1 (e.g. 0.25).' });
+			return z.NEVER;
+		}
+		return Math.round(n * 10000) / 10000;
+	})
+	.nullable()
+	.default(null);
+
+/**
+ * Where a joint sits on the job's drawing, as fractions of its width (x, from the left) and
+ * height (y, from the top). Both empty takes the marker off.
+ */
+export const markerSchema = z
+	.object({
+		jointId: z.coerce.number('Pick the joint.').int().positive('Pick the joint.'),
+		x: fraction,
+		y: fraction
+	})
+	.superRefine((m, ctx) => {
+		if ((m.x === null) !== (m.y === null))
+			ctx.addIssue({
+				code: 'custom',
+				path: [m.x === null ? 'x' : 'y'],
+				message: 'Give both across and down, or neither to take the marker off.'
+			});
+	});
+export type MarkerForm = z.infer<typeof markerSchema>;

@@ -11,3 +11,5 @@ export { checkWeld, type WeldCheck } from './weld-check';
 export { recordOverride } from './override';
 export { signatureHolds } from './signing';
 export { recordInspection, recordRepair } from './inspection';
+export { attachDrawing, openDrawing, openInspectionReport, placeMarker } from './drawing';
+export { fileResponse, MAX_JOB_FILE_BYTES } from './files';

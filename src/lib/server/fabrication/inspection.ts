@@ -15,23 +15,24 @@ import { INSPECT_ROLES, REPAIR_ROLES } from './access';
 import { roundOf } from './joint-history';
 import { revisionFor } from './joints';
 import { currentRound } from './rounds';
-import { checkSignature, sign } from './signing';
-import { findJoint } from './weld-log';
+import { checkSignature, inspectorsJoint, sign } from './signing';
+import { discardUploads } from '../storage';
+import { storeJobFile, type PostedFile } from './files';
+import { findJoint, type OnJob } from './weld-log';
 
 export async function recordInspection(
 	actor: SessionUser,
-	input: InspectionForm,
+	input: InspectionForm & OnJob & { report?: PostedFile | null },
 	event: RequestEvent | null = null
 ): Promise<{ id: number; digest: string }> {
-	if (!INSPECT_ROLES.includes(actor.role))
-		throw new ForbiddenError('Only an inspector records an inspection.');
-	const { joint, job } = await findJoint(actor.shopId, input.jointId);
-	await checkSignature(
+	const { joint, job } = await inspectorsJoint(
 		actor,
-		input.password,
-		{ objectType: 'job_joint', objectId: joint.id },
-		event
+		input,
+		'Only an inspector records an inspection.'
 	);
+	await checkSignature(actor, input.password, joint.id, event);
+	// The report is stored before the write and named in what is signed; a refused write drops it.
+	const report = input.report ? await storeJobFile(input.report, 'report', 'nde-report') : null;
 	return write(async (t) => {
 		const me = await actingMember(actor, INSPECT_ROLES, t);
 		const round = await currentRound(joint.id, t);
@@ -52,7 +53,8 @@ export async function recordInspection(
 			method: input.method,
 			extent: input.extent,
 			result: input.result,
-			note: input.note || null
+			note: input.note || null,
+			report: report && { name: report.name, sha256: report.sha256 }
 		};
 		const signed = sign(me, content);
 		const i = await JointInspection.create(
@@ -63,9 +65,9 @@ export async function recordInspection(
 				extent: input.extent,
 				result: input.result,
 				note: input.note || null,
-				reportKey: null,
-				reportName: null,
-				reportSha256: null,
+				reportKey: report?.key ?? null,
+				reportName: report?.name ?? null,
+				reportSha256: report?.sha256 ?? null,
 				...signed
 			},
 			{ transaction: t }
@@ -83,17 +85,20 @@ export async function recordInspection(
 			t
 		);
 		return { id: i.id, digest: signed.digest };
+	}).catch(async (e: unknown) => {
+		if (report) await discardUploads([report.key]);
+		throw e;
 	});
 }
 
 export async function recordRepair(
 	actor: SessionUser,
-	input: RepairForm,
+	input: RepairForm & OnJob,
 	event: RequestEvent | null = null
 ): Promise<{ id: number; round: number }> {
 	if (!REPAIR_ROLES.includes(actor.role))
 		throw new ForbiddenError('Engineers, admins and inspectors record repairs.');
-	const { joint, job } = await findJoint(actor.shopId, input.jointId);
+	const { joint, job } = await findJoint(actor.shopId, input.jointId, input.jobId);
 	return write(async (t) => {
 		const me = await actingMember(actor, REPAIR_ROLES, t);
 		// The joint's row is locked, so two repairs of one rejection cannot both open a round.

@@ -104,7 +104,8 @@ export async function historyOf(
 			printedName: i.printedName,
 			role: i.role,
 			signedAt: i.signedAt.toISOString(),
-			digest: i.digest
+			digest: i.digest,
+			report: i.reportKey ? { name: i.reportName ?? 'report' } : null
 		});
 	for (const r of repairs) {
 		const h = out.get(r.jointId);

@@ -7,22 +7,24 @@ import { audit } from '../audit';
 import type { SessionUser } from '../auth/session-user';
 import { write } from '../db';
 import { WeldOverride, Welder } from '../models';
-import { ForbiddenError, NotFoundError, RefusedError } from '../people/errors';
+import { NotFoundError, RefusedError } from '../people/errors';
 import { actingMember, actorOf } from '../procedures/access';
 import { localDay } from '../welders/dates';
 import { INSPECT_ROLES } from './access';
-import { checkSignature, sign } from './signing';
+import { checkSignature, inspectorsJoint, sign } from './signing';
 import { checkWeld } from './weld-check';
-import { findJoint } from './weld-log';
+import type { OnJob } from './weld-log';
 
 export async function recordOverride(
 	actor: SessionUser,
-	input: OverrideForm,
+	input: OverrideForm & OnJob,
 	event: RequestEvent | null = null
 ): Promise<{ id: number; digest: string }> {
-	if (!INSPECT_ROLES.includes(actor.role))
-		throw new ForbiddenError('Only an inspector can override a refused weld log.');
-	const { joint, job } = await findJoint(actor.shopId, input.jointId);
+	const { joint, job } = await inspectorsJoint(
+		actor,
+		input,
+		'Only an inspector can override a refused weld log.'
+	);
 	const welder = await Welder.findOne({ where: { id: input.welderId, shopId: actor.shopId } });
 	if (!welder) throw new NotFoundError('No such welder in your shop.');
 	const check = await checkWeld(actor.shopId, joint, welder, localDay(new Date(), actor.timeZone));
@@ -33,12 +35,7 @@ export async function recordOverride(
 			`${welder.name} may weld ${joint.mark} already; no override is needed.`,
 			'welderId'
 		);
-	await checkSignature(
-		actor,
-		input.password,
-		{ objectType: 'job_joint', objectId: joint.id },
-		event
-	);
+	await checkSignature(actor, input.password, joint.id, event);
 	return write(async (t) => {
 		const me = await actingMember(actor, INSPECT_ROLES, t);
 		const content = {

@@ -19,6 +19,13 @@ export interface JobView {
 	code: string;
 	dueOn: string | null;
 	createdAt: string;
+	/** The attached drawing; only an image can be marked on (a PDF is downloaded). */
+	drawingFile: {
+		name: string;
+		kind: 'pdf' | 'image';
+		width: number | null;
+		height: number | null;
+	} | null;
 	joints: JointView[];
 }
 
@@ -59,7 +66,8 @@ export async function jointsOf(shopId: number, jobIds: number[]): Promise<JointV
 			process: r?.process ?? '',
 			passes: r ? passesOf(readVariables(r).variables) : ['root', 'fill', 'cap'],
 			round: history.get(j.id)?.round ?? 0,
-			history: history.get(j.id)!
+			history: history.get(j.id)!,
+			marker: j.markerX === null || j.markerY === null ? null : { x: j.markerX, y: j.markerY }
 		};
 	});
 }
@@ -76,6 +84,14 @@ export async function jobView(actor: Pick<SessionUser, 'shopId'>, id: number): P
 		code: job.code,
 		dueOn: job.dueOn,
 		createdAt: job.createdAt.toISOString(),
+		drawingFile: job.drawingKey
+			? {
+					name: job.drawingName ?? 'drawing',
+					kind: job.drawingKey.endsWith('.pdf') ? 'pdf' : 'image',
+					width: job.drawingWidth,
+					height: job.drawingHeight
+				}
+			: null,
 		joints: await jointsOf(actor.shopId, [job.id])
 	};
 }

@@ -11,16 +11,34 @@ import type { SessionUser } from '../auth/session-user';
 import { write } from '../db';
 import type { Signed } from '../models/weld-log';
 import { User } from '../models';
-import { RefusedError } from '../people/errors';
+import { ForbiddenError, RefusedError } from '../people/errors';
 import { canonicalJson, digestOf, sha256Text } from '../procedures/canonical';
 import { TOO_MANY_PASSWORDS, WRONG_PASSWORD } from '../procedures/decide';
 import { actorOf } from '../procedures/access';
+import { INSPECT_ROLES } from './access';
+import { findJoint, type OnJob } from './weld-log';
 
-/** Checks the password before any write (bcrypt is slow on purpose); refuses in words. */
+/**
+ * The joint an inspector's signed step is about, after the role check (pages guard too; this
+ * is the service's own). A joint of another job than the one named is refused (`findJoint`).
+ */
+export async function inspectorsJoint(
+	actor: SessionUser,
+	input: { jointId: number } & OnJob,
+	forbidden: string
+) {
+	if (!INSPECT_ROLES.includes(actor.role)) throw new ForbiddenError(forbidden);
+	return findJoint(actor.shopId, input.jointId, input.jobId);
+}
+
+/**
+ * Checks the password before any write (bcrypt is slow on purpose); refuses in words. A wrong
+ * one is audited against the joint being signed for.
+ */
 export async function checkSignature(
 	actor: SessionUser,
 	password: string,
-	what: { objectType: string; objectId: number },
+	jointId: number,
 	event: RequestEvent | null
 ): Promise<void> {
 	if (await isLockedOut(actor.email)) throw new RefusedError(TOO_MANY_PASSWORDS, 'password');
@@ -36,8 +54,8 @@ export async function checkSignature(
 				shopId: actor.shopId,
 				actor: actorOf(actor),
 				action: 'job.signature_refused',
-				objectType: what.objectType,
-				objectId: what.objectId,
+				objectType: 'job_joint',
+				objectId: jointId,
 				after: { reason: 'wrong password' }
 			},
 			event,

@@ -28,23 +28,34 @@ export interface LoggedWeld {
 	overrideId: number | null;
 }
 
-/** The joint of the actor's shop, with its job (another shop's joint is "not found"). */
-export async function findJoint(shopId: number, jointId: number) {
+/** Where a form or endpoint names the job (its URL), the joint posted must be one of its own. */
+export interface OnJob {
+	jobId?: number;
+}
+
+/**
+ * The joint of the actor's shop, with its job (another shop's joint is "not found"). With
+ * `jobId`, a joint of another job of the shop is refused at the joint field: a page or endpoint
+ * of one job never writes to another job's joint through a hand-edited id.
+ */
+export async function findJoint(shopId: number, jointId: number, jobId?: number) {
 	const joint = await JobJoint.findOne({ where: { id: jointId, shopId } });
 	if (!joint) throw new NotFoundError('No such joint in your shop.');
+	if (jobId !== undefined && joint.jobId !== jobId)
+		throw new RefusedError('That joint is not on this job; pick one of its joints.', 'jointId');
 	const job = await Job.findOne({ where: { id: joint.jobId, shopId }, rejectOnEmpty: true });
 	return { joint, job };
 }
 
 export async function logWeld(
 	actor: SessionUser,
-	input: WeldLogForm,
+	input: WeldLogForm & OnJob,
 	event: RequestEvent | null = null,
 	now: Date = new Date()
 ): Promise<LoggedWeld> {
 	if (!WELD_ROLES.includes(actor.role))
 		throw new ForbiddenError('Only the welder who welded it logs a weld.');
-	const { joint, job } = await findJoint(actor.shopId, input.jointId);
+	const { joint, job } = await findJoint(actor.shopId, input.jointId, input.jobId);
 	const welder = await Welder.findOne({ where: { shopId: actor.shopId, userId: actor.id } });
 	if (!welder) throw new RefusedError(NOT_A_WELDER);
 	const today = localDay(now, actor.timeZone);

@@ -19,6 +19,13 @@ export class Job extends Model<InferAttributes<Job>, InferCreationAttributes<Job
 	declare drawingRev: string;
 	declare code: string;
 	declare dueOn: string | null;
+	/** The attached drawing (PDF or image), if any: storage key, name as sent, SHA-256. */
+	declare drawingKey: CreationOptional<string | null>;
+	declare drawingName: CreationOptional<string | null>;
+	declare drawingSha256: CreationOptional<string | null>;
+	/** An image drawing's size in pixels (null for a PDF). */
+	declare drawingWidth: CreationOptional<number | null>;
+	declare drawingHeight: CreationOptional<number | null>;
 	declare createdById: string;
 	declare createdAt: CreationOptional<Date>;
 	declare updatedAt: CreationOptional<Date>;
@@ -35,6 +42,11 @@ Job.init(
 		drawingRev: { type: DataTypes.STRING(20), allowNull: false },
 		code: { type: DataTypes.STRING(16), allowNull: false },
 		dueOn: { type: DataTypes.DATEONLY, allowNull: true },
+		drawingKey: { type: DataTypes.STRING(80), allowNull: true },
+		drawingName: { type: DataTypes.STRING(200), allowNull: true },
+		drawingSha256: { type: DataTypes.STRING(64), allowNull: true },
+		drawingWidth: { type: DataTypes.INTEGER, allowNull: true },
+		drawingHeight: { type: DataTypes.INTEGER, allowNull: true },
 		createdById: { type: DataTypes.UUID, allowNull: false },
 		createdAt: DataTypes.DATE,
 		updatedAt: DataTypes.DATE
@@ -53,6 +65,9 @@ export class JobJoint extends Model<InferAttributes<JobJoint>, InferCreationAttr
 	declare baseMetals: string;
 	declare position: string;
 	declare revisionId: number;
+	/** Where the joint is marked on the job's drawing, as fractions (0–1) of its width and height. */
+	declare markerX: CreationOptional<number | null>;
+	declare markerY: CreationOptional<number | null>;
 	declare createdAt: CreationOptional<Date>;
 	declare updatedAt: CreationOptional<Date>;
 }
@@ -68,6 +83,8 @@ JobJoint.init(
 		baseMetals: { type: DataTypes.STRING(120), allowNull: false },
 		position: { type: DataTypes.STRING(4), allowNull: false },
 		revisionId: { type: DataTypes.INTEGER, allowNull: false },
+		markerX: { type: DataTypes.REAL, allowNull: true },
+		markerY: { type: DataTypes.REAL, allowNull: true },
 		createdAt: DataTypes.DATE,
 		updatedAt: DataTypes.DATE
 	},

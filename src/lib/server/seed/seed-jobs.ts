@@ -1,8 +1,17 @@
 // The demo job (issue #17): an invented trailer hitch frame for an invented customer, half done.
-// Its joints are welded to the demo shop's procedures in force; Tomas Whitlow welded W1 to W3
-// two days before the seed ran (not today: a demo welder's booth tap today must still count) and Mirela Sand accepted W1 on sight; W4 to W6 wait for the welder. Idempotent: a job
+// Its drawing is attached with every joint marked. Its joints are welded to the demo shop's procedures in force; Tomas Whitlow welded W1 to W3
+// two days before the seed ran (not today: a demo welder's booth tap today must still count) and Mirela Sand accepted W1 on sight (her record attached); W4 to W6 wait for the welder. Idempotent: a job
 // whose number exists is left as it is.
-import { createJob, importJoints, jobView, logWeld, recordInspection } from '../fabrication';
+import {
+	attachDrawing,
+	createJob,
+	importJoints,
+	jobView,
+	logWeld,
+	placeMarker,
+	recordInspection
+} from '../fabrication';
+import { DEMO_MARKERS, demoDrawingPng, demoReportPdf } from './demo-drawing';
 import { Job, type Shop } from '../models';
 import { DEMO_PEOPLE } from './demo-people';
 import { member } from './seed-procedures';
@@ -31,6 +40,11 @@ export async function seedJobs(shop: Shop): Promise<number | null> {
 		dueOn: ''
 	});
 	await importJoints(reuben, id, JOINTS);
+	await attachDrawing(reuben, id, { bytes: await demoDrawingPng(), name: 'BAW-HF-220-C.png' });
+	for (const j of (await jobView(reuben, id)).joints) {
+		const at = DEMO_MARKERS[j.mark];
+		if (at) await placeMarker(reuben, id, { jointId: j.id, ...at });
+	}
 	const tomas = await member('tomas@larkspur.example', shop);
 	const mirela = await member('mirela@larkspur.example', shop);
 	const password = DEMO_PEOPLE.find((p) => p.email === 'mirela@larkspur.example')?.password;
@@ -47,7 +61,8 @@ export async function seedJobs(shop: Shop): Promise<number | null> {
 			extent: '100 %',
 			result: 'accept',
 			note: 'Fillet size and profile to the drawing.',
-			password
+			password,
+			report: { bytes: await demoReportPdf(), name: 'W1-visual-record.pdf' }
 		});
 	return id;
 }

@@ -3,6 +3,7 @@ import { zod4 } from '$lib/forms/zod4';
 import { requireRole } from '$lib/server/auth/guards';
 import {
 	addJoint,
+	attachDrawing,
 	CSV_EXAMPLE,
 	importJoints,
 	JOB_AUTHOR_ROLES,
@@ -11,6 +12,8 @@ import {
 	JointListError,
 	INSPECT_ROLES,
 	logWeld,
+	MAX_JOB_FILE_BYTES,
+	placeMarker,
 	recordInspection,
 	recordOverride,
 	recordRepair,
@@ -21,11 +24,13 @@ import { DATA_BOOK_ROLES } from '$lib/server/fabrication/data-book/access';
 import { dataBooksOf } from '$lib/server/fabrication/data-book/list';
 import { postedForm } from '$lib/server/forms/posted-form';
 import { Procedure, Welder } from '$lib/server/models';
+import { RefusedError } from '$lib/server/people/errors';
 import { refuseForm, rethrowAsHttp } from '$lib/server/people/form-errors';
 import {
 	inspectionSchema,
 	jointCsvSchema,
 	jointSchema,
+	markerSchema,
 	overrideSchema,
 	repairSchema,
 	weldLogSchema
@@ -47,6 +52,7 @@ export const load: PageServerLoad = async (event) => {
 	return {
 		job,
 		canEdit,
+		signer: { name: user.name, role: user.role },
 		canLog: WELD_ROLES.includes(user.role),
 		canInspect: INSPECT_ROLES.includes(user.role),
 		canRepair: REPAIR_ROLES.includes(user.role),
@@ -84,6 +90,20 @@ export const load: PageServerLoad = async (event) => {
 		csvForm: await superValidate(csvForm, { id: 'csv', errors: false })
 	};
 };
+
+/** A posted file, refused at its field before it is read when it is over the size limit. */
+async function postedFile(file: File, field: string) {
+	if (file.size > MAX_JOB_FILE_BYTES)
+		throw new RefusedError(`${file.name} is over the 20 MB limit.`, field);
+	return { bytes: new Uint8Array(await file.arrayBuffer()), name: file.name };
+}
+
+/** The drawing panel's outcome, at the field it concerns. */
+function drawingRefusal(e: unknown, field: string) {
+	const r = refusal(e);
+	const at = e instanceof RefusedError && e.field ? e.field : field;
+	return fail(r.status, { drawing: { ok: false, field: at, text: r.message } });
+}
 
 export const actions: Actions = {
 	addJoint: async (event) => {
@@ -127,7 +147,7 @@ export const actions: Actions = {
 				log: { jointId, ok: false, text: parsed.error.issues[0]?.message ?? 'Tick a pass.' }
 			});
 		try {
-			const r = await logWeld(user, parsed.data, event);
+			const r = await logWeld(user, { ...parsed.data, jobId: Number(event.params.id) }, event);
 			const text = `Logged ${r.logged.join(', ')}${r.already.length ? `; ${r.already.join(', ')} already logged` : ''}.`;
 			return { log: { jointId, ok: true, text } };
 		} catch (e) {
@@ -144,7 +164,7 @@ export const actions: Actions = {
 		form.data.password = ''; // the password is never sent back
 		if (!form.valid) return fail(400, { form });
 		try {
-			await recordOverride(user, input, event);
+			await recordOverride(user, { ...input, jobId: Number(event.params.id) }, event);
 		} catch (e) {
 			return refuseForm(form, e);
 		}
@@ -152,18 +172,49 @@ export const actions: Actions = {
 	},
 	inspect: async (event) => {
 		const user = requireRole(event, ...INSPECT_ROLES);
-		const form = await superValidate(await postedForm(event.request), inspectionForm, {
-			id: 'inspect'
-		});
+		const posted = await postedForm(event.request);
+		const form = await superValidate(posted, inspectionForm, { id: 'inspect' });
 		const input = { ...form.data };
 		form.data.password = ''; // the password is never sent back
 		if (!form.valid) return fail(400, { form });
+		const file = posted.get('report');
 		try {
-			await recordInspection(user, input, event);
+			const report =
+				file instanceof File && file.size > 0 ? await postedFile(file, 'report') : null;
+			await recordInspection(user, { ...input, jobId: Number(event.params.id), report }, event);
 		} catch (e) {
 			return refuseForm(form, e);
 		}
 		return message(form, { tone: 'success' as const, text: 'Inspection signed.' });
+	},
+	drawing: async (event) => {
+		const user = requireRole(event, ...JOB_AUTHOR_ROLES);
+		const file = (await postedForm(event.request)).get('drawing');
+		try {
+			if (!(file instanceof File) || file.size === 0)
+				throw new RefusedError('Choose a drawing: a PDF, PNG or JPEG file.', 'drawing');
+			await attachDrawing(user, Number(event.params.id), await postedFile(file, 'drawing'), event);
+		} catch (e) {
+			return drawingRefusal(e, 'drawing');
+		}
+		return { drawing: { ok: true, field: 'drawing', text: 'Drawing attached.' } };
+	},
+	mark: async (event) => {
+		const user = requireRole(event, ...JOB_AUTHOR_ROLES);
+		const posted = Object.fromEntries(await postedForm(event.request));
+		const parsed = markerSchema.safeParse(posted);
+		if (!parsed.success) {
+			const issue = parsed.error.issues[0];
+			return fail(400, {
+				drawing: { ok: false, field: String(issue?.path[0] ?? 'x'), text: issue?.message ?? '' }
+			});
+		}
+		try {
+			await placeMarker(user, Number(event.params.id), parsed.data, event);
+		} catch (e) {
+			return drawingRefusal(e, 'jointId');
+		}
+		return { drawing: { ok: true, field: 'jointId', text: 'Marker placed.' } };
 	},
 	repair: async (event) => {
 		const user = requireRole(event, ...REPAIR_ROLES);
@@ -173,7 +224,11 @@ export const actions: Actions = {
 		if (!form.valid) return fail(400, { form });
 		let round: number;
 		try {
-			({ round } = await recordRepair(user, form.data, event));
+			({ round } = await recordRepair(
+				user,
+				{ ...form.data, jobId: Number(event.params.id) },
+				event
+			));
 		} catch (e) {
 			return refuseForm(form, e);
 		}

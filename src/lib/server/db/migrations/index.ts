@@ -11,6 +11,7 @@ import * as recordsSearch from './0009-records-search';
 import * as continuityTaps from './0010-continuity-taps';
 import * as governingCode from './0011-governing-code';
 import * as jobs from './0012-jobs';
+import * as jobDrawings from './0013-job-drawings';
 import * as shopTimeZone from './0015-shop-time-zone';
 
 export interface Migration {
@@ -34,5 +35,6 @@ export const migrations: Migration[] = [
 	{ name: '0010-continuity-taps', ...continuityTaps },
 	{ name: '0011-governing-code', ...governingCode },
 	{ name: '0012-jobs', ...jobs },
+	{ name: '0013-job-drawings', ...jobDrawings },
 	{ name: '0015-shop-time-zone', ...shopTimeZone }
 ];
