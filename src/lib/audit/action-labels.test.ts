@@ -4,7 +4,7 @@ import { describe, expect, it } from 'vitest';
 import { ACTION_WORDS, actionWords, objectWords } from './action-labels';
 
 // Every event code the app writes, read from the source: the `action:` of each audit entry (up to
-// its objectType) and the code handed to changeMember. A new code without words fails here.
+// its objectType), the code handed to changeMember and the `…_AUDIT_CODES` tables of helpers. A new code without words fails here.
 function sources(dir: string): string[] {
 	return readdirSync(dir, { withFileTypes: true }).flatMap((d) => {
 		const p = join(dir, d.name);
@@ -22,6 +22,12 @@ function writtenCodes(): Set<string> {
 		for (const m of text.matchAll(/action:([\s\S]{0,300}?)objectType/g))
 			for (const c of (m[1] ?? '').matchAll(CODE)) codes.add(c[1]!);
 		for (const m of text.matchAll(/changeMember\(([^;]*)/g))
+			for (const c of (m[1] ?? '').matchAll(CODE)) codes.add(c[1]!);
+	}
+	// Codes a helper writes for its caller's step, listed whole in a `…_AUDIT_CODES` table.
+	for (const file of sources(join(process.cwd(), 'src'))) {
+		const text = readFileSync(file, 'utf8');
+		for (const m of text.matchAll(/_AUDIT_CODES = \{([^}]*)\}/g))
 			for (const c of (m[1] ?? '').matchAll(CODE)) codes.add(c[1]!);
 	}
 	return codes;

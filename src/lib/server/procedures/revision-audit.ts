@@ -2,16 +2,22 @@ import type { RequestEvent } from '@sveltejs/kit';
 import type { Transaction } from 'sequelize';
 import { audit } from '../audit';
 
-/** The steps of a revision's life the audit trail names (`procedure_revision.<step>`). */
-export type RevisionStep =
-	| 'created'
-	| 'updated'
-	| 'submitted'
-	| 'approved'
-	| 'returned'
-	| 'superseded'
-	| 'withdrawn'
-	| 'signature_refused';
+/**
+ * The steps of a revision's life and the code the audit trail names each by. Spelled out whole
+ * (not built from the step) so the codes stay searchable and action-labels.test.ts finds them.
+ */
+export const REVISION_AUDIT_CODES = {
+	created: 'procedure_revision.created',
+	updated: 'procedure_revision.updated',
+	submitted: 'procedure_revision.submitted',
+	approved: 'procedure_revision.approved',
+	returned: 'procedure_revision.returned',
+	superseded: 'procedure_revision.superseded',
+	withdrawn: 'procedure_revision.withdrawn',
+	signature_refused: 'procedure_revision.signature_refused'
+} as const;
+
+export type RevisionStep = keyof typeof REVISION_AUDIT_CODES;
 
 /**
  * Appends `procedure_revision.<step>` about one revision, in the transaction that made the step:
@@ -26,7 +32,7 @@ export function auditRevision(
 	actor: { id: string; name: string },
 	change: { before?: unknown; after?: unknown }
 ): Promise<void> {
-	const action = `procedure_revision.${step}`;
+	const action = REVISION_AUDIT_CODES[step];
 	const entry = { shopId: revision.shopId, actor, action, objectType: 'procedure_revision' };
 	return audit({ ...entry, objectId: revision.id, ...change }, event, t);
 }
