@@ -29,16 +29,18 @@ describe('CET (EN 1011-2 C.3)', () => {
 describe('preheat Tp (EN 1011-2 C.3)', () => {
 	it.each([
 		// Each Tp below: hand-computed from the EN 1011-2:2001 C.3 formula above (no published worked example found).
-		[{ C: 0.18, Mn: 1.4 }, 30, 5, 1.5, 92.5], // S355-like: 0.32, 30 mm, HD 5, 1.5 kJ/mm
-		[{ C: 0.15, Mn: 1.5, Cr: 0.1, Cu: 0.2, Ni: 0.3 }, 50, 10, 1.0, 163.3],
-		[{ C: 0.2, Mn: 1.2, Mo: 0.25, Cr: 1.0 }, 25, 5, 2.0, 132.2],
-		[{ C: 0.16, Mn: 1.45 }, 40, 10, 1.2, 134.8]
+		[{ C: 0.18, Mn: 1.4 }, 30, 5, 1.5, 92.5], // EN 1011-2:2001 C.3 formula, by hand: CET 0.32, 30 mm, HD 5, 1.5 kJ/mm
+		[{ C: 0.15, Mn: 1.5, Cr: 0.1, Cu: 0.2, Ni: 0.3 }, 50, 10, 1.0, 163.3], // EN 1011-2:2001 C.3 formula, by hand
+		[{ C: 0.2, Mn: 1.2, Mo: 0.25, Cr: 1.0 }, 25, 5, 2.0, 132.2], // EN 1011-2:2001 C.3 formula, by hand
+		[{ C: 0.16, Mn: 1.45 }, 40, 10, 1.2, 134.8] // EN 1011-2:2001 C.3 formula, by hand
 	])('%j, d %s mm, HD %s, Q %s -> %s °C', (chemistry, d, hd, q, tp) => {
 		const r = cetPreheat({ chemistry, thicknessMm: d, hydrogen: hd, heatInputKjPerMm: q });
 		expect(r.ok && r.preheatC).toBeCloseTo(tp, 0);
 		expect(r.ok && r.outsideValidity).toEqual([]);
 		expect(r.ok && r.source.kind).toBe('published');
 	});
+	// The method's validity bounds (CET 0.2-0.5, thickness 10-90 mm): from memory, listed unverified in
+	// reference/README.md.
 	it('a low result says no preheat from this method, and a CET under 0.2 is out of range', () => {
 		const r = cetPreheat({
 			chemistry: { C: 0.1, Mn: 0.9 },
@@ -77,7 +79,7 @@ describe('method A inputs (EN 1011-2 C.2)', () => {
 		// gowelding.com/weld/preheat/preheatinfo.htm: all paths taking heat from the weld)
 		[[20, 20], 40], // butt weld of two equal plates: twice the plate (same page)
 		[[10, 10, 10], 30], // T fillet: three times the thickness (same page)
-		[[25, 12], 37]
+		[[25, 12], 37] // two unequal heat paths add up (same page)
 	])('combined thickness of %j is %s', (paths, t) => expect(combinedThickness(paths)).toBe(t));
 	it('gives CE, scale and combined thickness and says where to read the preheat', () => {
 		const r = ceMethodA({ chemistry: { C: 0.18, Mn: 1.4 }, hydrogen: 5, paths: [20, 20] });
