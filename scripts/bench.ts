@@ -17,7 +17,7 @@ import { join } from 'node:path';
 import { stackEnv, startCatcher } from './lib/local-stack';
 import { openSqlite } from './lib/sqlite-file';
 import { signInCookie, timeSequential, waitFor } from './bench/http';
-import { measureClientJs } from './bench/client-js';
+import { benchPages, measureClientJs } from './bench/client-js';
 import { goalRows, printGoals } from './bench/goals';
 import { load, type LoadResult, type Route } from './bench/load';
 import { cpuMs, memoryMb, mixedRequests } from './bench/mixed';
@@ -258,16 +258,7 @@ if (rssAfterMixed)
 const js =
 	ONLY || flag('--no-js')
 		? undefined
-		: await measureClientJs(origin, [
-				{ name: 'signin', path: '/signin' },
-				{ name: 'booth-list', path: '/booth', cookie: welder },
-				{ name: 'procedures', path: '/procedures', cookie: engineer },
-				{ name: 'records', path: '/records', cookie: engineer },
-				{ name: 'record-form', path: '/records/new', cookie: engineer },
-				...(booth ? [{ name: 'booth-view', path: booth }] : []),
-				...(booth ? [{ name: 'booth-view (welder)', path: booth, cookie: welder }] : []),
-				{ name: 'scan', path: '/scan', cookie: welder }
-			]);
+		: await measureClientJs(origin, benchPages({ welder, engineer, booth }));
 
 // ---- the procedure sheet: the booth engineer's timing part (it prints its own table) ----
 let sheets: BenchFigures['sheets'];

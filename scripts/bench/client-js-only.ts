@@ -9,7 +9,7 @@ import { join, resolve } from 'node:path';
 import { prepareDatabase, stackEnv, startCatcher } from '../lib/local-stack';
 import { serverArgs } from '../lib/server-process';
 import { openSqlite } from '../lib/sqlite-file';
-import { measureClientJs } from './client-js';
+import { benchPages, measureClientJs } from './client-js';
 import { signInCookie, waitFor } from './http';
 import { freePort } from './ports';
 import { benchPerson } from './prepare';
@@ -47,16 +47,7 @@ try {
 	);
 	await db.close();
 	const booth = link && `/b/${link.token}`;
-	const pages = await measureClientJs(origin, [
-		{ name: 'signin', path: '/signin' },
-		{ name: 'booth-list', path: '/booth', cookie: welder },
-		{ name: 'procedures', path: '/procedures', cookie: engineer },
-		{ name: 'records', path: '/records', cookie: engineer },
-		{ name: 'record-form', path: '/records/new', cookie: engineer },
-		...(booth ? [{ name: 'booth-view', path: booth }] : []),
-		...(booth ? [{ name: 'booth-view (welder)', path: booth, cookie: welder }] : []),
-		{ name: 'scan', path: '/scan', cookie: welder }
-	]);
+	const pages = await measureClientJs(origin, benchPages({ welder, engineer, booth }));
 	for (const p of pages) {
 		console.log(
 			`${p.name.padEnd(22)} ${String(p.kb).padStart(6)} KB ${String(p.files).padStart(3)} files` +

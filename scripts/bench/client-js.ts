@@ -23,6 +23,21 @@ function qrDecoderChunk(kitOutDir: string): string | undefined {
 	return Object.entries(manifest).find(([src]) => src.includes('node_modules/jsqr/'))?.[1].file;
 }
 
+/** The pages the bench measures, each as the role that uses it (the booth view only with a link). */
+export function benchPages(who: { welder: string; engineer: string; booth?: string | null }) {
+	const { welder, engineer, booth } = who;
+	return [
+		{ name: 'signin', path: '/signin' },
+		{ name: 'booth-list', path: '/booth', cookie: welder },
+		{ name: 'procedures', path: '/procedures', cookie: engineer },
+		{ name: 'records', path: '/records', cookie: engineer },
+		{ name: 'record-form', path: '/records/new', cookie: engineer },
+		...(booth ? [{ name: 'booth-view', path: booth }] : []),
+		...(booth ? [{ name: 'booth-view (welder)', path: booth, cookie: welder }] : []),
+		{ name: 'scan', path: '/scan', cookie: welder }
+	];
+}
+
 export async function measureClientJs(
 	origin: string,
 	pages: { name: string; path: string; cookie?: string }[],
