@@ -23,15 +23,26 @@ export const zoneOr = (zone: string | null | undefined): string =>
 /** The zone this process runs in (TZ), where it is one the runtime knows; else UTC. */
 export const machineZone = (): string => zoneOr(Intl.DateTimeFormat().resolvedOptions().timeZone);
 
+// A formatter costs far more to make than to use, and the booth view asks for a day on every scan.
+const dayFormats = new Map<string, Intl.DateTimeFormat>();
+function dayFormat(zone: string): Intl.DateTimeFormat {
+	let f = dayFormats.get(zone);
+	if (!f) {
+		f = new Intl.DateTimeFormat('en-CA', {
+			timeZone: zone,
+			year: 'numeric',
+			month: '2-digit',
+			day: '2-digit'
+		});
+		dayFormats.set(zone, f);
+	}
+	return f;
+}
+
 /** The calendar day ('YYYY-MM-DD') a moment falls on in a zone. Never throws. */
 export function dayIn(moment: Date, zone: string | null | undefined): string {
 	const at = Number.isFinite(moment.getTime()) ? moment : new Date(0);
-	const parts = new Intl.DateTimeFormat('en-CA', {
-		timeZone: zoneOr(zone),
-		year: 'numeric',
-		month: '2-digit',
-		day: '2-digit'
-	}).formatToParts(at);
+	const parts = dayFormat(zoneOr(zone)).formatToParts(at);
 	const part = (type: string) => parts.find((p) => p.type === type)?.value ?? '01';
 	return `${part('year').padStart(4, '0')}-${part('month')}-${part('day')}`;
 }
