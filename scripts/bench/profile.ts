@@ -15,7 +15,7 @@ import { signInCookie, waitFor } from './http';
 import { load, type Route } from './load';
 import { benchPerson, prepareBench } from './prepare';
 import { addProcedures, addRecords } from './seed-bulk';
-import { topCosts } from './cpu-profile';
+import { busyMs, nowUs, topCosts, type Window } from './cpu-profile';
 
 const arg = (name: string, fallback: string) => {
 	const i = process.argv.indexOf(name);
@@ -123,8 +123,29 @@ const allRoutes: Route[] = [
 		: [])
 ];
 const routes = only ? allRoutes.filter((r) => only.includes(r.id!)) : allRoutes;
+// The server's own CPU (user + system) from the kernel: unlike the profile's samples it does not
+// count time the process waited for a core while other work ran on the machine. Linux only.
+const cpuMsOfServer = (): number | null => {
+	try {
+		const stat = readFileSync(`/proc/${server.pid}/stat`, 'utf8');
+		const f = stat.slice(stat.lastIndexOf(')') + 2).split(' ');
+		return ((Number(f[11]) + Number(f[12])) * 1000) / 100; // utime + stime, at 100 ticks a second
+	} catch {
+		return null;
+	}
+};
+const windows: { name: string; requests: number; w: Window; cpuMs: number | null }[] = [];
 for (const r of routes) {
+	const fromUs = nowUs();
+	const cpuFrom = cpuMsOfServer();
 	const res = await load(origin, r, { seconds: SECONDS, connections: 10 });
+	const cpuTo = cpuMsOfServer();
+	windows.push({
+		name: r.name,
+		requests: res.requests,
+		w: { fromUs, toUs: nowUs() },
+		cpuMs: cpuFrom === null || cpuTo === null ? null : cpuTo - cpuFrom
+	});
 	console.log(
 		`${r.name.padEnd(20)} ${String(res.reqPerSec).padStart(6)} req/s  p99 ${res.p99Ms} ms  non-2xx ${res.non2xx}`
 	);
@@ -132,11 +153,24 @@ for (const r of routes) {
 const exited = new Promise((r) => server.once('exit', r));
 server.kill('SIGTERM');
 await exited;
-rmSync(dataDir, { recursive: true, force: true });
+if (!process.env.PROFILE_KEEP) rmSync(dataDir, { recursive: true, force: true });
+else console.log("kept", dataDir);
 
 const file = readdirSync(outDir).find((f) => f.endsWith('.cpuprofile'));
 if (!file) throw new Error(`No .cpuprofile in ${outDir}`);
 const profile = JSON.parse(readFileSync(join(outDir, file), 'utf8'));
+// Server CPU per answered request, each route over its own load window (the machine may be busy
+// with other work: CPU per request holds where req/s does not).
+for (const { name, requests, w, cpuMs } of windows) {
+	const per = (ms: number) => (ms / Math.max(requests, 1)).toFixed(2);
+	const kernel = cpuMs === null ? '' : `, ${per(cpuMs)} ms by the kernel's count`;
+	console.log(
+		`\n${name}: ${per(busyMs(profile, w))} ms CPU per request by the profile${kernel} (${requests} requests)`
+	);
+	for (const row of topCosts(profile, 15, 'function', w)) console.log(row);
+	console.log('  by package:');
+	for (const row of topCosts(profile, 6, 'package', w)) console.log(row);
+}
 console.log(`\nTop self time over all routes (${join(outDir, file)}):`);
 for (const row of topCosts(profile, 25)) console.log(row);
 console.log('\nBy package (self time):');

@@ -2,12 +2,13 @@
 // the shade and the job's cautions, the signature (re-verified now; a mismatch goes to the trail),
 // and whether the member is a welder who has logged this process today.
 import type { RequestEvent } from '@sveltejs/kit';
-import { Op } from 'sequelize';
 import { CODE_LABELS, type CodeId } from '$lib/procedures/options';
 import type { ShadeAdvice } from '$lib/safety/cautions';
 import type { Process } from '$lib/weld';
 import type { SessionUser } from '../auth/session-user';
-import { ContinuityEntry, Pqr, ProcedureRevision, RevisionPqr, SignOff, Welder } from '../models';
+import { QueryTypes } from 'sequelize';
+import { sequelize } from '../db/sequelize';
+import { ProcedureRevision, RevisionPqr } from '../models';
 import {
 	ARC_KEYS,
 	atTheArc,
@@ -18,7 +19,7 @@ import {
 	type Value,
 	type ValueGroup
 } from '../pdf/sheet-content';
-import { checkIntegrity } from '../procedures/digest';
+import { integrityOf, signOffsOf } from '../procedures/digest';
 import { readVariables } from '../procedures/find';
 import { reportTamper } from '../procedures/read';
 import { localDay } from '../welders/dates';
@@ -47,39 +48,57 @@ export interface BoothMemberView {
 	today: string;
 }
 
+// The member's welder and whether the process is logged today, in one plain read.
+const WELDER_SQL = `SELECT w.name, EXISTS (SELECT 1 FROM continuity_entries c
+	WHERE c.welder_id = w.id AND c.process = ? AND c.used_on = ?) AS used
+	FROM welders w WHERE w.shop_id = ? AND w.user_id = ? LIMIT 1`;
+
+async function welderToday(
+	user: SessionUser,
+	process: Process,
+	today: string
+): Promise<BoothMemberView['welder']> {
+	const [row] = await sequelize.query<{ name: string; used: unknown }>(WELDER_SQL, {
+		replacements: [process, today, user.shopId, user.id],
+		type: QueryTypes.SELECT
+	});
+	// SQLite answers EXISTS with 0 or 1, PostgreSQL with a boolean.
+	return row ? { name: row.name, loggedToday: Number(row.used) > 0 } : null;
+}
+
 export async function memberView(
 	user: SessionUser,
 	status: BoothStatus,
 	event: RequestEvent | null
 ): Promise<BoothMemberView> {
-	const revision = await ProcedureRevision.findOne({
-		where: { id: status.revisionId, shopId: user.shopId },
-		rejectOnEmpty: true
-	});
+	// One read of each row serves both the page and the integrity check; the check itself (digest
+	// and every seal recomputed) runs on every view.
+	const [revision, signOffs, pqrLinks] = await Promise.all([
+		ProcedureRevision.findOne({
+			where: { id: status.revisionId, shopId: user.shopId },
+			rejectOnEmpty: true
+		}),
+		signOffsOf(status.revisionId),
+		RevisionPqr.findAll({ where: { revisionId: status.revisionId, shopId: user.shopId } })
+	]);
 	const { variables: v } = readVariables(revision);
 	const today = localDay(new Date(), user.timeZone);
-	const [integrity, signOff, pqrLinks, welder] = await Promise.all([
-		checkIntegrity(revision.id),
-		SignOff.findOne({
-			where: { revisionId: revision.id, shopId: user.shopId, meaning: 'approved' },
-			order: [['id', 'DESC']]
+	const [{ integrity, pqrs: read }, welder] = await Promise.all([
+		integrityOf({
+			revision,
+			signOffs,
+			pqrLinks,
+			procedure: { id: status.procedureId, number: status.number }
 		}),
-		RevisionPqr.findAll({ where: { revisionId: revision.id, shopId: user.shopId } }),
-		Welder.findOne({ where: { shopId: user.shopId, userId: user.id } })
+		welderToday(user, v.process, today)
 	]);
 	if (integrity.signed && !integrity.ok)
 		await reportTamper(user, user.shopId, revision.id, integrity, event);
-	const [pqrs, used] = await Promise.all([
-		pqrLinks.length
-			? Pqr.findAll({
-					where: { shopId: user.shopId, id: { [Op.in]: pqrLinks.map((l) => l.pqrId) } },
-					order: [['number', 'ASC']]
-				})
-			: [],
-		welder
-			? ContinuityEntry.count({ where: { welderId: welder.id, process: v.process, usedOn: today } })
-			: 0
-	]);
+	const signOff =
+		signOffs.filter((s) => s.shopId === user.shopId && s.meaning === 'approved').at(-1) ?? null;
+	const pqrs = read
+		.filter((p) => p.shopId === user.shopId)
+		.sort((a, b) => (a.number < b.number ? -1 : a.number > b.number ? 1 : 0));
 	const edition = v.codeEdition ? `, edition ${v.codeEdition}` : '';
 	return {
 		title: v.title,
@@ -103,7 +122,7 @@ export async function memberView(
 				}
 			: null,
 		intact: integrity.ok,
-		welder: welder ? { name: welder.name, loggedToday: used > 0 } : null,
+		welder,
 		today
 	};
 }

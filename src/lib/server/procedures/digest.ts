@@ -39,7 +39,11 @@ async function reportsOf(shopId: number, pqrIds: number[], t?: Transaction) {
 
 /** The certified content of a PQR, as signed by its certifier. */
 export async function pqrCanonical(pqr: Pqr, t?: Transaction) {
-	const reports = await reportsOf(pqr.shopId, [pqr.id], t);
+	return pqrCanonicalWith(pqr, await reportsOf(pqr.shopId, [pqr.id], t));
+}
+
+/** The same, from the PQR's live reports already read (in its shop) in this request. */
+function pqrCanonicalWith(pqr: Pqr, reports: Awaited<ReturnType<typeof reportsOf>>) {
 	return {
 		kind: 'pqr',
 		v: 1,
@@ -47,7 +51,9 @@ export async function pqrCanonical(pqr: Pqr, t?: Transaction) {
 		values: parse(pqr.actualValues),
 		tests: parse(pqr.tests),
 		qualified: parse(pqr.qualified),
-		attachments: reports.map((r) => ({ reportId: r.reportId, name: r.name, sha256: r.sha256 }))
+		attachments: reports
+			.filter((r) => r.pqrId === pqr.id)
+			.map((r) => ({ reportId: r.reportId, name: r.name, sha256: r.sha256 }))
 	};
 }
 
@@ -61,6 +67,12 @@ export interface RevisionContent {
 	digest: string;
 }
 
+/** What the digest is computed from, besides the revision: read now, in the revision's shop. */
+interface ContentRows {
+	pqrs: Pqr[];
+	reports: Awaited<ReturnType<typeof reportsOf>>;
+}
+
 /** The revision's canonical content and its digest, from the rows as stored now. */
 export async function revisionContent(
 	revisionId: number,
@@ -70,7 +82,7 @@ export async function revisionContent(
 		rejectOnEmpty: true,
 		transaction: t
 	});
-	return contentOf(revision, await pqrLinksOf(revision, t), t);
+	return (await contentOf(revision, await pqrLinksOf(revision, t), null, t)).content;
 }
 
 const pqrLinksOf = (revision: ProcedureRevision, t?: Transaction) =>
@@ -79,16 +91,27 @@ const pqrLinksOf = (revision: ProcedureRevision, t?: Transaction) =>
 		transaction: t
 	});
 
-/** The content of a revision already read, with its PQR links (read with it, in the same shop). */
+/**
+ * The content of a revision already read, with its PQR links (read with it, in the same shop).
+ * `procedure` is the revision's procedure when the caller read it in this request already.
+ */
 async function contentOf(
 	revision: ProcedureRevision,
 	pqrLinks: RevisionPqr[],
+	procedureRead: { id: number; number: string } | null,
 	t?: Transaction
-): Promise<RevisionContent> {
+): Promise<{ content: RevisionContent; rows: ContentRows }> {
 	const revisionId = revision.id;
 	const [procedure, recordLinks] = await Promise.all([
-		Procedure.findByPk(revision.procedureId, { rejectOnEmpty: true, transaction: t }),
-		RevisionRecord.findAll({ where: { revisionId, shopId: revision.shopId }, transaction: t })
+		procedureRead?.id === revision.procedureId
+			? procedureRead
+			: Procedure.findByPk(revision.procedureId, { rejectOnEmpty: true, transaction: t }),
+		RevisionRecord.findAll({
+			where: { revisionId, shopId: revision.shopId },
+			attributes: ['recordId'],
+			raw: true,
+			transaction: t
+		})
 	]);
 	const pqrIds = pqrLinks.map((l) => l.pqrId).sort((a, b) => a - b);
 	const pqrs = pqrIds.length
@@ -112,7 +135,7 @@ async function contentOf(
 		attachments: reports.map((r) => ({ pqrId: r.pqrId, reportId: r.reportId, sha256: r.sha256 }))
 	};
 	const json = canonicalJson(canonical);
-	return { canonical, json, digest: sha256Text(json) };
+	return { content: { canonical, json, digest: sha256Text(json) }, rows: { pqrs, reports } };
 }
 
 interface Manifestation {
@@ -149,10 +172,33 @@ export async function checkIntegrity(revisionId: number, t?: Transaction): Promi
 	// The revision and its PQR links are read once and serve both the digest and the checks below.
 	const [revision, signOffs] = await Promise.all([
 		ProcedureRevision.findByPk(revisionId, { rejectOnEmpty: true, transaction: t }),
-		SignOff.findAll({ where: { revisionId }, order: [['id', 'ASC']], transaction: t })
+		signOffsOf(revisionId, t)
 	]);
 	const pqrLinks = await pqrLinksOf(revision, t);
-	const content = await contentOf(revision, pqrLinks, t);
+	return (await integrityOf({ revision, signOffs, pqrLinks }, t)).integrity;
+}
+
+/** Every sign-off of a revision, oldest first, as `integrityOf` takes them. */
+export const signOffsOf = (revisionId: number, t?: Transaction) =>
+	SignOff.findAll({ where: { revisionId }, order: [['id', 'ASC']], transaction: t });
+
+/**
+ * The same checks from rows the caller read in this request (the booth view reads them for its
+ * own page too): the revision, all its sign-offs (`signOffsOf`), its PQR links in its shop, and
+ * optionally its procedure. Nothing is kept between requests: every view recomputes the digest
+ * and every seal. Also hands back the PQRs read for the digest (in the revision's shop).
+ */
+export async function integrityOf(
+	read: {
+		revision: ProcedureRevision;
+		signOffs: SignOff[];
+		pqrLinks: RevisionPqr[];
+		procedure?: { id: number; number: string };
+	},
+	t?: Transaction
+): Promise<{ integrity: Integrity; pqrs: Pqr[] }> {
+	const { revision, signOffs, pqrLinks } = read;
+	const { content, rows } = await contentOf(revision, pqrLinks, read.procedure ?? null, t);
 	const problems: string[] = [];
 	for (const s of signOffs)
 		if (sealOf(s) !== s.seal)
@@ -162,23 +208,32 @@ export async function checkIntegrity(revisionId: number, t?: Transaction): Promi
 		problems.push('The revision as stored now differs from what was signed.');
 	if (!approval && ['approved', 'superseded', 'withdrawn'].includes(revision.state))
 		problems.push('The revision is marked signed but carries no approving signature.');
-	// The PQRs a signed revision leans on must still be what their certifiers signed.
+	// The PQRs a signed revision leans on must still be what their certifiers signed. The digest's
+	// read serves when it found every linked PQR (then each is in the revision's shop, and so are
+	// the reports read with them); otherwise they are read again wherever they are.
 	if (approval) {
-		const pqrs = pqrLinks.length
-			? await Pqr.findAll({
-					where: { id: { [Op.in]: pqrLinks.map((l) => l.pqrId) } },
-					transaction: t
-				})
-			: [];
-		for (const p of pqrs)
-			if (p.certifiedDigest && (await pqrDigest(p, t)) !== p.certifiedDigest)
+		const ids = new Set(pqrLinks.map((l) => l.pqrId));
+		const allRead = rows.pqrs.length === ids.size;
+		const pqrs = allRead
+			? rows.pqrs
+			: ids.size
+				? await Pqr.findAll({ where: { id: { [Op.in]: [...ids] } }, transaction: t })
+				: [];
+		for (const p of pqrs) {
+			if (!p.certifiedDigest) continue;
+			const digest = allRead ? digestOf(pqrCanonicalWith(p, rows.reports)) : await pqrDigest(p, t);
+			if (digest !== p.certifiedDigest)
 				problems.push(`${p.number} differs from what was certified.`);
+		}
 	}
 	return {
-		signed: !!approval || problems.length > 0,
-		ok: problems.length === 0,
-		signedDigest: approval?.digest ?? null,
-		computedDigest: content.digest,
-		problems
+		integrity: {
+			signed: !!approval || problems.length > 0,
+			ok: problems.length === 0,
+			signedDigest: approval?.digest ?? null,
+			computedDigest: content.digest,
+			problems
+		},
+		pqrs: rows.pqrs
 	};
 }
