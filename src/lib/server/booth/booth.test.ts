@@ -9,7 +9,9 @@ process.env.DATABASE_FILE = join(dir, 'test.sqlite');
 process.env.UPLOADS_DIR = join(dir, 'uploads');
 process.env.ORIGIN = 'http://booth.test';
 
-const { AuditEvent, BoothLink, BoothLookup, ContinuityEntry, Welder } = await import('../models');
+const { AuditEvent, BoothLink, BoothLookup, ContinuityEntry, ProcedureRevision, Welder } =
+	await import('../models');
+const { sequelize } = await import('../db/sequelize');
 const { ForbiddenError, NotFoundError, RefusedError } = await import('../people/errors');
 const procedures = await import('../procedures');
 const T = await import('../procedures/test-support');
@@ -213,5 +215,36 @@ describe('one-tap continuity', () => {
 		await expect(booth.tapContinuity(a.welder, status, null)).rejects.toThrow(
 			/not the one in force/
 		);
+	});
+});
+
+describe('the member view', () => {
+	it('verifies the signature on every view, with one read of each row', async () => {
+		const id = await approved();
+		const status = (await booth.resolveBoothToken(await liveToken(id, 1)))!;
+		const queries: string[] = [];
+		const logging = sequelize.options.logging;
+		sequelize.options.logging = (sql: string) => void queries.push(sql);
+		const clean = await booth.memberView(a.welder, status, null).finally(() => {
+			sequelize.options.logging = logging;
+		});
+		expect(clean.intact).toBe(true);
+		expect(clean.signOff?.meaning).toBe('Approved');
+		// Revision, sign-offs, PQR links, cited records, the welder with today's log: nothing twice.
+		expect(queries).toHaveLength(5);
+		const row = await ProcedureRevision.findOne({ where: { procedureId: id, rev: 1 } });
+		await sequelize.query(
+			'UPDATE procedure_revisions SET variables = replace(variables, \'"max":135\', \'"max":185\') WHERE id = ?',
+			{ replacements: [row!.id] }
+		);
+		const tamperEvents = () =>
+			AuditEvent.count({
+				where: { objectId: String(row!.id), action: 'procedure_revision.tamper_detected' }
+			});
+		expect((await booth.memberView(a.welder, status, null)).intact).toBe(false);
+		expect(await tamperEvents()).toBe(1);
+		// Nothing is kept from one view to the next: the next scan checks again, and reports again.
+		expect((await booth.memberView(a.welder, status, null)).intact).toBe(false);
+		expect(await tamperEvents()).toBe(2);
 	});
 });
