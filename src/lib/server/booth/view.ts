@@ -72,14 +72,21 @@ export async function memberView(
 	event: RequestEvent | null
 ): Promise<BoothMemberView> {
 	// One read of each row serves both the page and the integrity check; the check itself (digest
-	// and every seal recomputed) runs on every view.
+	// and every seal recomputed) runs on every view. Plain rows where nothing needs a model's
+	// getters (the sign-offs' dates do, for their seals).
 	const [revision, signOffs, pqrLinks] = await Promise.all([
 		ProcedureRevision.findOne({
 			where: { id: status.revisionId, shopId: user.shopId },
-			rejectOnEmpty: true
+			attributes: ['id', 'shopId', 'procedureId', 'rev', 'state', 'variables', 'process', 'code'],
+			rejectOnEmpty: true,
+			raw: true
 		}),
 		signOffsOf(status.revisionId),
-		RevisionPqr.findAll({ where: { revisionId: status.revisionId, shopId: user.shopId } })
+		RevisionPqr.findAll({
+			where: { revisionId: status.revisionId, shopId: user.shopId },
+			attributes: ['id', 'shopId', 'revisionId', 'pqrId'],
+			raw: true
+		})
 	]);
 	const { variables: v } = readVariables(revision);
 	const today = localDay(new Date(), user.timeZone);
