@@ -154,7 +154,7 @@ const exited = new Promise((r) => server.once('exit', r));
 server.kill('SIGTERM');
 await exited;
 if (!process.env.PROFILE_KEEP) rmSync(dataDir, { recursive: true, force: true });
-else console.log("kept", dataDir);
+else console.log('kept', dataDir);
 
 const file = readdirSync(outDir).find((f) => f.endsWith('.cpuprofile'));
 if (!file) throw new Error(`No .cpuprofile in ${outDir}`);
