@@ -232,14 +232,7 @@ describe('the member view', () => {
 		// Revision, sign-offs, PQR links, cited records, the welder with today's log: nothing twice.
 		expect(queries).toBe(5);
 		const row = await ProcedureRevision.findOne({ where: { procedureId: id, rev: 1 } });
-		await sequelize.query(
-			'UPDATE procedure_revisions SET variables = replace(variables, \'"max":135\', \'"max":185\') WHERE id = ?',
-			{ replacements: [row!.id] }
-		);
-		const tamperEvents = () =>
-			AuditEvent.count({
-				where: { objectId: String(row!.id), action: 'procedure_revision.tamper_detected' }
-			});
+		const tamperEvents = await T.tamperWithRevision(row!.id);
 		expect((await booth.memberView(a.welder, status, null)).intact).toBe(false);
 		expect(await tamperEvents()).toBe(1);
 		// Nothing is kept from one view to the next: the next scan checks again, and reports again.

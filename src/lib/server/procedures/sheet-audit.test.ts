@@ -10,7 +10,6 @@ const dir = mkdtempSync(join(tmpdir(), 'beadline-sheet-audit-'));
 process.env.DATABASE_FILE = join(dir, 'test.sqlite');
 process.env.UPLOADS_DIR = join(dir, 'uploads');
 
-const { sequelize } = await import('../db');
 const { AuditEvent, ProcedureRevision } = await import('../models');
 const { ForbiddenError } = await import('../people/errors');
 const { currentSheets, sheetFor } = await import('../booth');
@@ -67,10 +66,7 @@ describe('sheet downloads', () => {
 
 	it('records a tampered sheet as not intact, and the tamper itself', async () => {
 		const { id, revisionId } = await approved('BAD');
-		await sequelize.query(
-			`UPDATE procedure_revisions SET variables = replace(variables, '"max":135', '"max":185') WHERE id = ?`,
-			{ replacements: [revisionId] }
-		);
+		await T.tamperWithRevision(revisionId);
 		const input = await sheetFor(a.shopId, id, {});
 		expect(input.intact).toBe(false);
 		await svc.recordSheetDownload(a.engineer, input);

@@ -150,14 +150,7 @@ describe('signing', () => {
 		expect(clean.b).toMatchObject({ rev: 1, integrity: { signed: true, ok: true } });
 		expect(clean.a.integrity.signed).toBe(false);
 		const row = await ProcedureRevision.findOne({ where: { procedureId: id, rev: 1 } });
-		await sequelize.query(
-			'UPDATE procedure_revisions SET variables = replace(variables, \'"max":135\', \'"max":185\') WHERE id = ?',
-			{ replacements: [row!.id] }
-		);
-		const tamperEvents = () =>
-			AuditEvent.count({
-				where: { objectId: String(row!.id), action: 'procedure_revision.tamper_detected' }
-			});
+		const tamperEvents = await T.tamperWithRevision(row!.id);
 		const seen = await svc.diffRevisions(a.engineer, id, rev, 1);
 		expect(seen.b.integrity.ok).toBe(false);
 		expect(seen.b.integrity.problems).toContain(

@@ -1,7 +1,8 @@
 // Helpers for the procedure and PQR services' tests only. Import after DATABASE_FILE is set.
 import { hashPassword } from '../auth/password';
 import { migrate } from '../db';
-import { ProcedureRevision, User } from '../models';
+import { sequelize } from '../db/sequelize';
+import { AuditEvent, ProcedureRevision, User } from '../models';
 import { asSessionUser, newShop, uniqueEmail } from '../people/test-support';
 import type { PqrForm } from '$lib/schemas/pqr';
 import { pqrFormSchema } from '$lib/schemas/pqr';
@@ -109,3 +110,18 @@ export async function procedureInReview(people: People): Promise<number> {
 
 export const revisionState = async (procedureId: number, rev: number) =>
 	(await ProcedureRevision.findOne({ where: { procedureId, rev } }))?.state;
+
+/**
+ * Alters a stored revision behind the service's back (its amperage top 135 → 185), as a tamperer
+ * with database access would, and counts the tamper events the trail then holds for it.
+ */
+export async function tamperWithRevision(revisionId: number) {
+	await sequelize.query(
+		`UPDATE procedure_revisions SET variables = replace(variables, '"max":135', '"max":185') WHERE id = ?`,
+		{ replacements: [revisionId] }
+	);
+	return () =>
+		AuditEvent.count({
+			where: { objectId: String(revisionId), action: 'procedure_revision.tamper_detected' }
+		});
+}
